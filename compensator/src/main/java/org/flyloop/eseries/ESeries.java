@@ -175,7 +175,7 @@ public enum ESeries {
     private double member(long k) {
         int n = mantissas.length;
         long decade = Math.floorDiv(k, n);
-        int i = (int) Math.floorMod(k, n);
+        int i = Math.floorMod(k, n);
         return scale(mantissas[i], (int) decade - fractionDigits);
     }
 

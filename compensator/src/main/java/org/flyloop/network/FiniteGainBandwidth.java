@@ -10,7 +10,7 @@ import org.flyloop.linear.TransferFunction;
  *
  * <p>With feedback impedance Zf = Nf/Df, input impedance Zin = Ni/Di (from the output being
  * regulated to the inverting input) and r_lower from the inverting input to ground, the node
- * equation at the inverting input gives the textbook inverting-amplifier result
+ * equation at the inverting input gives the standard inverting-amplifier result
  * <pre>
  *   Gc = (Zf/Zin) · 1 / (1 + (1 + Zf/(Zin‖r_lower)) / A)
  * </pre>

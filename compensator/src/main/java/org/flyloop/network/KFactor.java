@@ -21,17 +21,25 @@ import org.flyloop.linear.Root;
  *
  * @param type        1, 2 or 3
  * @param crossoverHz the crossover frequency fc, Hz
- * @param boostDeg    the phase boost the placement gives at fc, degrees (0 for type 1)
- * @param k           the K factor (1 for type 1)
+ * @param boostDeg    the phase boost wanted at fc, degrees: ≤ 0 for type 1, within (0°, 90°) for
+ *                    type 2, within (0°, 180°) for type 3
  */
-public record KFactor(int type, double crossoverHz, double boostDeg, double k) {
+public record KFactor(int type, double crossoverHz, double boostDeg) {
 
     public KFactor {
-        if (type < 1 || type > 3) {
-            throw new IllegalArgumentException("the K factor is defined for types 1, 2 and 3, got " + type);
-        }
         PartChecks.positive("crossover frequency", crossoverHz);
-        PartChecks.positive("K", k);
+        switch (type) {
+            case 1 -> {
+                if (boostDeg > 0) {
+                    throw new IllegalArgumentException("type 1 gives no phase boost; " + boostDeg
+                            + "° needs type " + lowestTypeFor(boostDeg));
+                }
+            }
+            case 2 -> requireWithin(boostDeg, 90, type);
+            case 3 -> requireWithin(boostDeg, 180, type);
+            default -> throw new IllegalArgumentException(
+                    "the K factor is defined for types 1, 2 and 3, got " + type);
+        }
     }
 
     /** Boost = M − P − 90° (Venable 1983), degrees. */
@@ -65,23 +73,7 @@ public record KFactor(int type, double crossoverHz, double boostDeg, double k) {
      *         boost; type 2: outside (0°, 90°); type 3: outside (0°, 180°))
      */
     public static KFactor forBoost(int type, double crossoverHz, double boostDeg) {
-        switch (type) {
-            case 1:
-                if (boostDeg > 0) {
-                    throw new IllegalArgumentException("type 1 gives no phase boost; " + boostDeg
-                            + "° needs type " + lowestTypeFor(boostDeg));
-                }
-                return new KFactor(1, crossoverHz, 0, 1);
-            case 2:
-                requireWithin(boostDeg, 90, type);
-                return new KFactor(2, crossoverHz, boostDeg, Math.tan(Math.toRadians(boostDeg / 2 + 45)));
-            case 3:
-                requireWithin(boostDeg, 180, type);
-                double t = Math.tan(Math.toRadians(boostDeg / 4 + 45));
-                return new KFactor(3, crossoverHz, boostDeg, t * t);
-            default:
-                throw new IllegalArgumentException("the K factor is defined for types 1, 2 and 3, got " + type);
-        }
+        return new KFactor(type, crossoverHz, boostDeg);
     }
 
     private static void requireWithin(double boostDeg, double limitDeg, int type) {
@@ -91,11 +83,28 @@ public record KFactor(int type, double crossoverHz, double boostDeg, double k) {
         }
     }
 
+    /** K: 1 (type 1), tan(B/2 + 45°) (type 2), tan²(B/4 + 45°) (type 3); Venable 1983. */
+    public double k() {
+        return switch (type) {
+            case 2 -> Math.tan(Math.toRadians(boostDeg / 2 + 45));
+            case 3 -> {
+                double t = Math.tan(Math.toRadians(boostDeg / 4 + 45));
+                yield t * t;
+            }
+            default -> 1;
+        };
+    }
+
+    /** The boost the placement delivers at fc: B for types 2 and 3, 0 for type 1, degrees. */
+    public double deliveredBoostDeg() {
+        return type == 1 ? 0 : boostDeg;
+    }
+
     /** Frequency of the (double, for type 3) zero: fc/K (type 2), fc/√K (type 3); NaN for type 1. */
     public double zeroHz() {
         return switch (type) {
-            case 2 -> crossoverHz / k;
-            case 3 -> crossoverHz / Math.sqrt(k);
+            case 2 -> crossoverHz / k();
+            case 3 -> crossoverHz / Math.sqrt(k());
             default -> Double.NaN;
         };
     }
@@ -103,8 +112,8 @@ public record KFactor(int type, double crossoverHz, double boostDeg, double k) {
     /** Frequency of the (double, for type 3) pole: fc·K (type 2), fc·√K (type 3); NaN for type 1. */
     public double poleHz() {
         return switch (type) {
-            case 2 -> crossoverHz * k;
-            case 3 -> crossoverHz * Math.sqrt(k);
+            case 2 -> crossoverHz * k();
+            case 3 -> crossoverHz * Math.sqrt(k());
             default -> Double.NaN;
         };
     }
