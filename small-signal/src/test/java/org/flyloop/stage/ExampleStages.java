@@ -49,6 +49,12 @@ public final class ExampleStages {
                 100e-6, 1, 100e-6, 0, 0, 0);
     }
 
+    /** The five lossy stages and the lossless one. */
+    public static java.util.List<StageSpec> all() {
+        return java.util.List.of(offlineAdapter(), telecomBrick(), auxiliaryRail(), standbySupply(),
+                notebookAdapter(), ideal());
+    }
+
     /** Voltage-mode control with a 2 V ramp and a 0.75 duty limit. */
     public static ControlSpec voltageMode() {
         return ControlSpec.voltageMode(2, 0.75);
