@@ -39,7 +39,6 @@ public final class OperatingPointSolver {
 
     private final StageSpec stage;
     private final ControlSpec control;
-    private final BrentSolver brent = new BrentSolver(1e-15, 1e-15);
 
     public OperatingPointSolver(StageSpec stage, ControlSpec control) {
         this.stage = Objects.requireNonNull(stage, "stage");
@@ -130,7 +129,11 @@ public final class OperatingPointSolver {
                 n * ipk, iswRms, irectRms, iinAvg, ioutBoundary, vswMax);
     }
 
-    /** Every corner of vin.corners() × iout.corners(), vin ascending then iout ascending. */
+    /**
+     * Every corner of vin.corners() × iout.corners(), vin ascending then iout ascending.
+     *
+     * @throws InfeasibleOperatingPointException for the first corner the stage cannot run at
+     */
     public List<OperatingPoint> corners() {
         List<OperatingPoint> out = new ArrayList<>();
         for (double vin : stage.vin().corners()) {
@@ -157,7 +160,7 @@ public final class OperatingPointSolver {
         double lm = stage.lm();
         double c = stage.switchResistance() * vr * ts / (2 * lm);
         UnivariateFunction residual = dd -> c * dd * dd + (vin - c + vr) * dd - vr;
-        double d = brent.solve(200, residual, 0, 1);
+        double d = brent().solve(200, residual, 0, 1);
         double im = (1 - d) * vr * ts / (2 * lm);
         return (1 - d) * stage.turns() * im;
     }
@@ -184,7 +187,7 @@ public final class OperatingPointSolver {
         if (g.value(dm) == 0) {
             return dm;
         }
-        return brent.solve(200, g, 0, dm);
+        return brent().solve(200, g, 0, dm);
     }
 
     /**
@@ -207,6 +210,11 @@ public final class OperatingPointSolver {
     /** DCM peak magnetizing current √(2·(Vout + Vf)·Ts·Iout/Lm), A; see {@link #dcmDuty}. */
     private double dcmPeakCurrent(double iout) {
         return Math.sqrt(2 * (stage.vout() + stage.rectifierDrop()) * stage.periodS() * iout / stage.lm());
+    }
+
+    /** A fresh solver per use: Commons Math solvers count evaluations and are not thread-safe. */
+    private static BrentSolver brent() {
+        return new BrentSolver(1e-15, 1e-15);
     }
 
     /** Vr = N·(Vout + Vf), V. */
