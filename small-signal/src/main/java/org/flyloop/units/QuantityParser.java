@@ -113,8 +113,10 @@ public final class QuantityParser {
             prefixFactor = 1e6;
             unitText = rest.substring(3);
         } else if (rest.startsWith("M")) {
+            String unit = shown(rest.substring(1));
             throw new QuantityFormatException("'" + shown(whole) + "': M is ambiguous (milli or mega?)",
-                    "write " + numberText + "meg or " + numberText + "e6 for mega, " + numberText + "m for milli");
+                    "write " + numberText + "meg" + unit + " or " + numberText + "e6" + unit + " for mega, "
+                            + numberText + "m" + unit + " for milli");
         } else {
             Spelling direct = spelling(rest);
             if (direct != null) {

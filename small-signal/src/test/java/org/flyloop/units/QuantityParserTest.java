@@ -88,6 +88,13 @@ class QuantityParserTest {
     }
 
     @Test
+    void megaHintKeepsTheUnit() {
+        QuantityFormatException e = assertThrows(QuantityFormatException.class,
+                () -> QuantityParser.parse("2.2MHz", Unit.HERTZ));
+        assertEquals("write 2.2megHz or 2.2e6Hz for mega, 2.2mHz for milli", e.accepted());
+    }
+
+    @Test
     void inductanceForACapacitanceNamesTheExpectedUnit() {
         QuantityFormatException e = assertThrows(QuantityFormatException.class,
                 () -> QuantityParser.parse("2.2uH", Unit.FARAD));

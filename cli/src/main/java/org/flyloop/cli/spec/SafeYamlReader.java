@@ -145,7 +145,7 @@ public final class SafeYamlReader {
 
         private InputException duplicate(String path) {
             return new InputException(source + ": " + path, "duplicate key",
-                    "write each key once; YAML would silently keep only the last");
+                    "write each key once (YAML would silently keep only the last)");
         }
 
         InputException translate(JsonProcessingException e) {
