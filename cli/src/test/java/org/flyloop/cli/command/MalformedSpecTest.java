@@ -117,7 +117,22 @@ class MalformedSpecTest {
         Files.writeString(file, GOOD.replace("  vout: 12\n", "  vout: 12\n  rectifier_drop: 0.5\n")
                 .replace("iout: [0.1, 2]", "iout: [1.9, 2]") + "  duty_max: 0.4\n");
         CliRun run = CliRun.of("stage", file.toString());
-        assertOneLineError(run, "flyloop: " + file + ": ");
+        assertOneLineError(run, "flyloop: " + file + ": at vin=90 V");
+        assertTrue(run.err().contains("control.duty_max"), run.err());
+    }
+
+    @Test
+    void unreachableOutputIsAnInputError() throws IOException {
+        // Hand check with the CCM volt-second and charge balances, Vin·D − Rds·Im·D = Vr·(1 − D)
+        // and Iout = N·Im·(1 − D): with a = Rds·Iout/N = 100·2/8 = 25 V, Vr = 8·12 = 96 V (no
+        // rectifier drop) and Vin = 90 V, g(D) = D(1 − D)·Vin − D·a − (1 − D)²·Vr peaks at
+        // D = (Vin − a + 2Vr)/(2(Vin + Vr)) = 0.691 with g = −7.2 V < 0: no duty cycle delivers 2 A,
+        // and at light load DCM needs even more volt-seconds.
+        Path file = dir.resolve("reach.yaml");
+        Files.writeString(file, GOOD.replace("  vout: 12\n", "  vout: 12\n  switch_resistance: 100\n"));
+        CliRun run = CliRun.of("stage", file.toString());
+        assertOneLineError(run, "flyloop: " + file + ": at vin=90 V");
+        assertTrue(run.err().contains("stage.switch_resistance"), run.err());
     }
 
     @Test
