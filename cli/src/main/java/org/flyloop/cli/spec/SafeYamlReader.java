@@ -53,7 +53,7 @@ public final class SafeYamlReader {
      */
     public static ObjectNode readMapping(String text, String source) {
         Builder b = new Builder(source);
-        try (YAMLParser p = (YAMLParser) FACTORY.createParser(text)) {
+        try (YAMLParser p = FACTORY.createParser(text)) {
             b.parser = p;
             JsonToken first = p.nextToken();
             if (first == null) {
