@@ -1,11 +1,11 @@
 package org.flyloop.cli.command;
 
-import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.flyloop.cli.ExitCodes;
 import org.flyloop.cli.output.OperatingPointJson;
 import org.flyloop.cli.output.OperatingPointTable;
+import org.flyloop.cli.output.PendingOutput;
 import org.flyloop.cli.output.SafetyNotice;
 import org.flyloop.cli.spec.Spec;
 import org.flyloop.stage.OperatingPoint;
@@ -36,22 +36,28 @@ public final class StageCommand implements Callable<Integer> {
     @picocli.CommandLine.Spec
     private CommandSpec command;
 
+    /**
+     * Load, solve, format, then commit. Options added later (other models, plots, netlists) add
+     * their own sections or files to the same {@link PendingOutput} before the commit, so a
+     * failure in any of them still leaves no output behind.
+     */
     @Override
     public Integer call() {
         Spec spec = specOptions.loadSpec();
         List<OperatingPoint> points = pointOptions.solve(spec);
-        String text = specOptions.json() ? OperatingPointJson.render(points) : humanReadable(spec, points);
-        PrintWriter out = command.commandLine().getOut();
-        out.print(text);
-        out.flush();
-        return ExitCodes.OK;
-    }
-
-    private String humanReadable(Spec spec, List<OperatingPoint> points) {
-        String table = OperatingPointTable.render(points);
-        if (specOptions.quiet()) {
-            return table;
+        PendingOutput output = new PendingOutput();
+        if (specOptions.json()) {
+            output.print(OperatingPointJson.render(points));
+        } else {
+            if (!specOptions.quiet()) {
+                output.print(spec.displayTitle() + "\n");
+            }
+            output.print(OperatingPointTable.render(points));
+            if (!specOptions.quiet()) {
+                output.print(SafetyNotice.ONE_LINE + "\n");
+            }
         }
-        return spec.displayTitle() + "\n" + table + SafetyNotice.ONE_LINE + "\n";
+        output.commit(command.commandLine().getOut());
+        return ExitCodes.OK;
     }
 }
