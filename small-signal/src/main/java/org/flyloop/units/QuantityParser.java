@@ -151,11 +151,6 @@ public final class QuantityParser {
         return null;
     }
 
-    /** Parses a dimensionless number, e.g. a turns ratio or a duty cycle ({@code 75%} = 0.75). */
-    public static double parseNumber(String text) {
-        return parse(text, Unit.DIMENSIONLESS);
-    }
-
     /** The text as it may appear inside a one-line message: line breaks and tabs become spaces. */
     private static String shown(String s) {
         String oneLine = s.replaceAll("\\s+", " ");

@@ -215,7 +215,7 @@ public final class SpecSection {
 
     /** Which signs a quantity may have. */
     public enum Sign {
-        POSITIVE("positive"), ZERO_OR_POSITIVE("zero or positive"), ANY("a number");
+        POSITIVE("positive"), ZERO_OR_POSITIVE("zero or positive");
 
         private final String word;
 
@@ -231,7 +231,6 @@ public final class SpecSection {
             return switch (this) {
                 case POSITIVE -> v > 0;
                 case ZERO_OR_POSITIVE -> v >= 0;
-                case ANY -> true;
             };
         }
     }
