@@ -1,0 +1,128 @@
+package org.flyloop.averaged;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import org.apache.commons.math3.complex.Complex;
+import org.ejml.data.Complex_F64;
+import org.ejml.data.DMatrixRMaj;
+import org.ejml.data.ZMatrixRMaj;
+import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
+import org.ejml.dense.row.CommonOps_ZDRM;
+import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
+
+/**
+ * The averaged model linearized at an equilibrium: dx/dt = A·x + B·u, y = C·x + D·u, all in
+ * deviations from the operating point, SI units, time in seconds. Inputs in
+ * {@link AveragedInputs#NAMES} order (control, vin, istep); outputs as named by the circuit
+ * (vout, il). Matrices are copied in and out; instances are immutable.
+ */
+public final class LinearizedModel {
+
+    private final DMatrixRMaj a;
+    private final DMatrixRMaj b;
+    private final DMatrixRMaj c;
+    private final DMatrixRMaj d;
+    private final List<String> stateNames;
+    private final List<String> outputNames;
+    private final Equilibrium operatingPoint;
+
+    LinearizedModel(DMatrixRMaj a, DMatrixRMaj b, DMatrixRMaj c, DMatrixRMaj d, List<String> stateNames,
+                    List<String> outputNames, Equilibrium operatingPoint) {
+        this.a = a.copy();
+        this.b = b.copy();
+        this.c = c.copy();
+        this.d = d.copy();
+        this.stateNames = Collections.unmodifiableList(new ArrayList<>(stateNames));
+        this.outputNames = Collections.unmodifiableList(new ArrayList<>(outputNames));
+        this.operatingPoint = operatingPoint;
+    }
+
+    public DMatrixRMaj a() {
+        return a.copy();
+    }
+
+    public DMatrixRMaj b() {
+        return b.copy();
+    }
+
+    public DMatrixRMaj c() {
+        return c.copy();
+    }
+
+    public DMatrixRMaj d() {
+        return d.copy();
+    }
+
+    public List<String> stateNames() {
+        return stateNames;
+    }
+
+    public List<String> inputNames() {
+        return AveragedInputs.NAMES;
+    }
+
+    public List<String> outputNames() {
+        return outputNames;
+    }
+
+    public Equilibrium operatingPoint() {
+        return operatingPoint;
+    }
+
+    /** Row of the named output. */
+    public int outputIndex(String name) {
+        int i = outputNames.indexOf(name);
+        if (i < 0) {
+            throw new IllegalArgumentException("no output called " + name);
+        }
+        return i;
+    }
+
+    /**
+     * The transfer from input column {@code input} to output row {@code output} at s = j·2π·f:
+     * H = C·(sI − A)⁻¹·B + D, evaluated exactly by a complex LU solve (no polynomial coefficients).
+     */
+    public Complex response(int output, int input, double frequencyHz) {
+        int n = a.numRows;
+        double w = 2 * Math.PI * frequencyHz;
+        ZMatrixRMaj m = new ZMatrixRMaj(n, n);
+        ZMatrixRMaj rhs = new ZMatrixRMaj(n, 1);
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                m.set(i, j, -a.get(i, j), i == j ? w : 0);
+            }
+            rhs.set(i, 0, b.get(i, input), 0);
+        }
+        ZMatrixRMaj x = new ZMatrixRMaj(n, 1);
+        if (!CommonOps_ZDRM.solve(m, rhs, x)) {
+            throw new ArithmeticException("sI − A is singular at " + frequencyHz + " Hz");
+        }
+        double re = d.get(output, input);
+        double im = 0;
+        for (int j = 0; j < n; j++) {
+            re += c.get(output, j) * x.getReal(j, 0);
+            im += c.get(output, j) * x.getImag(j, 0);
+        }
+        return new Complex(re, im);
+    }
+
+    /** DC gain from input column to output row: D − C·A⁻¹·B. */
+    public double dcGain(int output, int input) {
+        return response(output, input, 0).getReal();
+    }
+
+    /** Eigenvalues of A, rad/s. */
+    public List<Complex> poles() {
+        EigenDecomposition_F64<DMatrixRMaj> eig = DecompositionFactory_DDRM.eig(a.numRows, false);
+        if (!eig.decompose(a.copy())) {
+            throw new ArithmeticException("eigenvalue decomposition of A failed");
+        }
+        List<Complex> out = new ArrayList<>();
+        for (int i = 0; i < a.numRows; i++) {
+            Complex_F64 e = eig.getEigenvalue(i);
+            out.add(new Complex(e.real, e.imaginary));
+        }
+        return out;
+    }
+}

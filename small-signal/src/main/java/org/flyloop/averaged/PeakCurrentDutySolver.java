@@ -1,0 +1,119 @@
+package org.flyloop.averaged;
+
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.optim.MaxEval;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
+import org.apache.commons.math3.optim.univariate.BrentOptimizer;
+import org.apache.commons.math3.optim.univariate.SearchInterval;
+import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
+import org.flyloop.spec.ControlSpec;
+
+/**
+ * Finds the duty cycle of peak-current-mode control from the averaged peak-current relation.
+ *
+ * <p>The comparator ends the on-interval when the sensed primary current reaches
+ * {@code i_pk,pri = (vc − Se·d·Ts)/Ri} (Ri = control.sense V/A, Se = control.slope V/s); referred
+ * to the secondary the commanded peak is {@code N·i_pk,pri}. The peak of the averaged waveform is
+ * <pre>
+ *   i_pk = i_on + m1·d·Ts/2 + λ·(m2·d′ − m1·d)·d′·Ts/2,   m1 = v_on/Ls, m2 = (v_o + Vf)/Ls, d′ = 1 − d
+ * </pre>
+ * With λ = 1 and i_on = iL (CCM) this is the "more accurate" averaged current-mode relation of
+ * R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed., 2001, ch. 12.3:
+ * ⟨iL⟩ = i_c − m_a·d·Ts − m1·d²·Ts/2 − m2·d′²·Ts/2. With λ = 0 and i_on = i_pk/2 (DCM) it is the
+ * exact DCM peak i_pk = m1·d·Ts, so in DCM the peak relation alone sets d.
+ *
+ * <p>The last term vanishes at equilibrium (volt-second balance m1·d = m2·d′) but not off it, and
+ * at the CCM/DCM boundary it would make d jump. λ therefore rises from 0 to 1 with a C¹ smoothstep
+ * over the first 1 % of CCM depth q = 2·iL/i_pk,DCM − 1 (the valley at 0 … 0.5 % of the ripple,
+ * the load band that {@code ConductionMode.BOUNDARY} already marks as "both models apply"). This
+ * blend is our construction, no source; equilibria are unaffected because the term is zero there.
+ *
+ * <p>Solving: f(d) = i_pk(d) − N·(vc − Se·d·Ts)/Ri is convex in CCM (a quadratic with positive
+ * curvature, the E&amp;M relation) and increasing in DCM, so the physical duty is its largest root
+ * in [0, duty_max] (the one where dI/dd &gt; 0 at equilibrium, i.e. the E&amp;M gain Fm = 1/(Ma·Ts)
+ * is positive). Each evaluation scans f on a 32-point grid from duty_max downward, then refines
+ * the bracket with Brent's method. If f(duty_max) &lt; 0 the controller sits at its duty limit.
+ * If f never falls below zero (the magnetizing current already exceeds any commanded peak, only
+ * seen far from equilibrium) the duty is the minimiser of f, which is where the two roots merge,
+ * keeping d continuous. With Se = 0 the CCM roots merge at equilibrium (Fm unbounded): the model
+ * still runs, but its CCM linearization is singular.
+ */
+final class PeakCurrentDutySolver {
+
+    /** CCM depth over which the off-equilibrium term is blended in (see class comment). */
+    static final double BLEND_DEPTH = 0.01;
+    private static final int GRID = 32;
+
+    private final AveragedSwitchNetwork network;
+    private final double turnsOverSense;
+    private final double slopeVPerS;
+    private final double periodS;
+    private final double dutyMax;
+
+    PeakCurrentDutySolver(AveragedSwitchNetwork network, ControlSpec control, double turns, double periodS) {
+        this.network = network;
+        this.turnsOverSense = turns / control.senseVPerA();
+        this.slopeVPerS = control.slopeVPerS();
+        this.periodS = periodS;
+        this.dutyMax = control.dutyMax();
+    }
+
+    /**
+     * Secondary-referred peak of the averaged waveform (class comment).
+     *
+     * @param secondaryVoltageV v_o + Vf, the winding voltage during demagnetization
+     * @param ccmMarginA        2·iL − i_pk,DCM
+     */
+    static double averagedPeak(double iL, double d, double ion, double von, double secondaryVoltageV,
+                               double ccmMarginA, double ipkDcm, double ls, double ts) {
+        double base = ion + von * d * ts / (2 * ls);
+        double dp = 1 - d;
+        double offEquilibrium = (secondaryVoltageV * dp - von * d) * dp * ts / (2 * ls);
+        double q = ipkDcm > 0 ? ccmMarginA / ipkDcm : (ccmMarginA > 0 ? Double.POSITIVE_INFINITY : -1);
+        return base + blend(q) * offEquilibrium;
+    }
+
+    /** C¹ smoothstep from 0 at q = 0 to 1 at q = {@link #BLEND_DEPTH}. */
+    static double blend(double q) {
+        if (q <= 0) {
+            return 0;
+        }
+        if (q >= BLEND_DEPTH) {
+            return 1;
+        }
+        double t = q / BLEND_DEPTH;
+        return t * t * (3 - 2 * t);
+    }
+
+    /** Commanded secondary-referred peak N·(vc − Se·d·Ts)/Ri. */
+    double commandedPeak(double vc, double d) {
+        return turnsOverSense * (vc - slopeVPerS * d * periodS);
+    }
+
+    /** The duty cycle for comparator voltage {@code vc} (class comment). */
+    double duty(double iL, double vc, double vinV, DoubleUnaryOperator voutOfRect) {
+        UnivariateFunction f = d -> network.atDuty(d, iL, vinV, voutOfRect).peakCurrentA() - commandedPeak(vc, d);
+        double fHigh = f.value(dutyMax);
+        if (fHigh <= 0) {
+            return dutyMax;
+        }
+        double hi = dutyMax;
+        for (int k = GRID - 1; k >= 0; k--) {
+            double lo = dutyMax * k / GRID;
+            double fLo = f.value(lo);
+            if (fLo == 0) {
+                return lo;
+            }
+            if (fLo < 0) {
+                BrentSolver solver = new BrentSolver(1e-15, 1e-15, 1e-18);
+                return solver.solve(200, f, lo, hi);
+            }
+            hi = lo;
+        }
+        BrentOptimizer opt = new BrentOptimizer(1e-12, 1e-15);
+        return opt.optimize(new MaxEval(200), new UnivariateObjectiveFunction(f), GoalType.MINIMIZE,
+                new SearchInterval(0, dutyMax)).getPoint();
+    }
+}
