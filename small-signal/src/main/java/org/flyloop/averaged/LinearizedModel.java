@@ -6,10 +6,10 @@ import java.util.List;
 import org.apache.commons.math3.complex.Complex;
 import org.ejml.data.Complex_F64;
 import org.ejml.data.DMatrixRMaj;
-import org.ejml.data.ZMatrixRMaj;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
-import org.ejml.dense.row.CommonOps_ZDRM;
 import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
+import org.flyloop.linear.StateSpace;
+import org.flyloop.linear.TransferFunction;
 
 /**
  * The averaged model linearized at an equilibrium: dx/dt = A·x + B·u, y = C·x + D·u, all in
@@ -26,6 +26,7 @@ public final class LinearizedModel {
     private final List<String> stateNames;
     private final List<String> outputNames;
     private final Equilibrium operatingPoint;
+    private final StateSpace stateSpace;
 
     LinearizedModel(DMatrixRMaj a, DMatrixRMaj b, DMatrixRMaj c, DMatrixRMaj d, List<String> stateNames,
                     List<String> outputNames, Equilibrium operatingPoint) {
@@ -36,6 +37,7 @@ public final class LinearizedModel {
         this.stateNames = Collections.unmodifiableList(new ArrayList<>(stateNames));
         this.outputNames = Collections.unmodifiableList(new ArrayList<>(outputNames));
         this.operatingPoint = operatingPoint;
+        this.stateSpace = StateSpace.of(a, b, c, d);
     }
 
     public DMatrixRMaj a() {
@@ -79,37 +81,32 @@ public final class LinearizedModel {
         return i;
     }
 
+    /** The model as the core's {@link StateSpace} (same matrices, same input and output order). */
+    public StateSpace toStateSpace() {
+        return StateSpace.of(a, b, c, d);
+    }
+
     /**
      * The transfer from input column {@code input} to output row {@code output} at s = j·2π·f:
-     * H = C·(sI − A)⁻¹·B + D, evaluated exactly by a complex LU solve (no polynomial coefficients).
+     * H = C·(sI − A)⁻¹·B + D, evaluated exactly (complex LU solve, no polynomial coefficients).
      */
     public Complex response(int output, int input, double frequencyHz) {
-        int n = a.numRows;
-        double w = 2 * Math.PI * frequencyHz;
-        ZMatrixRMaj m = new ZMatrixRMaj(n, n);
-        ZMatrixRMaj rhs = new ZMatrixRMaj(n, 1);
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                m.set(i, j, -a.get(i, j), i == j ? w : 0);
-            }
-            rhs.set(i, 0, b.get(i, input), 0);
-        }
-        ZMatrixRMaj x = new ZMatrixRMaj(n, 1);
-        if (!CommonOps_ZDRM.solve(m, rhs, x)) {
-            throw new ArithmeticException("sI − A is singular at " + frequencyHz + " Hz");
-        }
-        double re = d.get(output, input);
-        double im = 0;
-        for (int j = 0; j < n; j++) {
-            re += c.get(output, j) * x.getReal(j, 0);
-            im += c.get(output, j) * x.getImag(j, 0);
-        }
-        return new Complex(re, im);
+        double[] out = new double[2];
+        stateSpace.evaluateInto(frequencyHz, output, input, out);
+        return new Complex(out[0], out[1]);
+    }
+
+    /**
+     * The factored transfer function of one channel (poles: eigenvalues of A; zeros: the channel's
+     * invariant zeros), from the core's conversion.
+     */
+    public TransferFunction transferFunction(int output, int input) {
+        return stateSpace.toTransferFunction(output, input);
     }
 
     /** DC gain from input column to output row: D − C·A⁻¹·B. */
     public double dcGain(int output, int input) {
-        return response(output, input, 0).getReal();
+        return stateSpace.evaluateAt(Complex.ZERO, output, input).getReal();
     }
 
     /** Eigenvalues of A, rad/s. */
