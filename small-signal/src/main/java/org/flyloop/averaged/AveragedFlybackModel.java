@@ -148,7 +148,7 @@ public final class AveragedFlybackModel {
     public Transient simulate(Scenario scenario, double durationS, int intervals) {
         AveragedFlybackCircuit circuit = circuit(scenario.loadResistanceOhm());
         double[] x0 = scenario.fromSteadyState()
-                ? equilibrium(scenario.inputs().at(0), scenario.loadResistanceOhm()).state()
+                ? equilibrium(scenario.inputs().before(0), scenario.loadResistanceOhm()).state()
                 : new double[circuit.layout().size()];
         return new TransientSimulator(circuit, stage.turns(), eventCheckIntervalS())
                 .run(scenario.name(), x0, scenario.inputs(), durationS, intervals);

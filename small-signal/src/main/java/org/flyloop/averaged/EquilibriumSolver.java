@@ -67,7 +67,7 @@ final class EquilibriumSolver {
                 rhs.set(i, 0, -f[i]);
             }
             DMatrixRMaj dx = new DMatrixRMaj(n, 1);
-            if (!CommonOps_DDRM.solve(jac, rhs, dx)) {
+            if (!CommonOps_DDRM.solve(jac, rhs, dx) || !allFinite(dx.data)) {
                 return null;
             }
             double alpha = 1;
@@ -105,6 +105,15 @@ final class EquilibriumSolver {
             }
         }
         return residualIsSmall(x, f) ? x : null;
+    }
+
+    private static boolean allFinite(double[] v) {
+        for (double e : v) {
+            if (!Double.isFinite(e)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private double merit(double[] x, double[] f) {

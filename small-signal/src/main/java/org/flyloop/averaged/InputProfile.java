@@ -99,6 +99,11 @@ public final class InputProfile {
         return new AveragedInputs(valueAt(0, timeS, false), valueAt(1, timeS, false), valueAt(2, timeS, false));
     }
 
+    /** All inputs just before {@code timeS} (the left limit: the value before any step there). */
+    public AveragedInputs before(double timeS) {
+        return new AveragedInputs(valueAt(0, timeS, true), valueAt(1, timeS, true), valueAt(2, timeS, true));
+    }
+
     /**
      * All inputs at {@code timeS} as seen from inside the interval (startS, endS]: at {@code endS}
      * the value before any step there.

@@ -33,8 +33,10 @@ import org.flyloop.spec.ControlSpec;
  * <p>Solving: f(d) = i_pk(d) − N·(vc − Se·d·Ts)/Ri is convex in CCM (a quadratic with positive
  * curvature, the E&amp;M relation) and increasing in DCM, so the physical duty is its largest root
  * in [0, duty_max] (the one where dI/dd &gt; 0 at equilibrium, i.e. the E&amp;M gain Fm = 1/(Ma·Ts)
- * is positive). Each evaluation scans f on a 32-point grid from duty_max downward, then refines
- * the bracket with Brent's method. If f(duty_max) &lt; 0 the controller sits at its duty limit.
+ * is positive). Each evaluation first tries the closed-form DCM duty (kept when the cycle at that
+ * duty is DCM with d2 &gt; 0, where λ = 0 and the relation is exact), then the bracket [vertex of the CCM quadratic, duty_max]
+ * (one root above a point where f &lt; 0, since f is convex there and increasing beyond); failing
+ * that it scans f on a 32-point grid from duty_max downward. Brent's method refines the bracket. If f(duty_max) &lt; 0 the controller sits at its duty limit.
  * If f never falls below zero (the magnetizing current already exceeds any commanded peak, only
  * seen far from equilibrium) the duty is the minimiser of f, which is where the two roots merge,
  * keeping d continuous. With Se = 0 the CCM roots merge at equilibrium (Fm unbounded): the model
@@ -92,12 +94,54 @@ final class PeakCurrentDutySolver {
         return turnsOverSense * (vc - slopeVPerS * d * periodS);
     }
 
+    /**
+     * DCM duty from Vg′·d·Ts/(Ls + Rds′·d·Ts/2) = k·(vc − Se·d·Ts), k = N/Ri: the positive root of
+     * a·d² + b·d + c = 0 with a = k·Se·Ts²·Rds′/2, b = Vg′·Ts − k·vc·Rds′·Ts/2 + k·Se·Ts·Ls,
+     * c = −k·vc·Ls, in the cancellation-free form 2·(−c)/(b + √(b² − 4ac)). NaN when vc ≤ 0.
+     */
+    double dcmDuty(double vc, double vinV) {
+        if (!(vc > 0)) {
+            return Double.NaN;
+        }
+        double ls = network.secondaryInductance();
+        double rds = network.secondarySwitchResistance();
+        double k = turnsOverSense;
+        double a = k * slopeVPerS * periodS * periodS * rds / 2;
+        double b = vinV / network.turns() * periodS - k * vc * rds * periodS / 2 + k * slopeVPerS * periodS * ls;
+        double c = -k * vc * ls;
+        double disc = b * b - 4 * a * c;
+        double den = b + Math.sqrt(disc);
+        return den > 0 ? -2 * c / den : Double.NaN;
+    }
+
     /** The duty cycle for comparator voltage {@code vc} (class comment). */
     double duty(double iL, double vc, double vinV, DoubleUnaryOperator voutOfRect) {
         UnivariateFunction f = d -> network.atDuty(d, iL, vinV, voutOfRect).peakCurrentA() - commandedPeak(vc, d);
         double fHigh = f.value(dutyMax);
+        if (Double.isNaN(fHigh)) {
+            return Double.NaN;
+        }
         if (fHigh <= 0) {
             return dutyMax;
+        }
+        // Fast path in DCM: with λ = 0 and 0 < d2 < 1 − d the relation is i_pk,DCM(d) = commanded(d),
+        // a quadratic in d; f increases through DCM, so a DCM root is the largest one.
+        double dDcm = dcmDuty(vc, vinV);
+        if (dDcm > 0 && dDcm <= dutyMax) {
+            SwitchCycle c = network.atDuty(dDcm, iL, vinV, voutOfRect);
+            if (c.ccmMarginA() < 0 && c.duty2() > 0) {
+                return dDcm;
+            }
+        }
+        // Fast path: in CCM f is the E&M quadratic, smallest at d = (m2 − ma)/(m1 + m2); a negative
+        // value there brackets the largest root with duty_max.
+        double ls = network.secondaryInductance();
+        double m1 = (vinV / network.turns() - network.secondarySwitchResistance() * iL) / ls;
+        double m2 = (voutOfRect.applyAsDouble(0) + network.rectifierDropV()) / ls;
+        double ma = turnsOverSense * slopeVPerS;
+        double dVertex = (m2 - ma) / (m1 + m2);
+        if (dVertex > 0 && dVertex < dutyMax && f.value(dVertex) < 0) {
+            return new BrentSolver(1e-15, 1e-15, 1e-18).solve(200, f, dVertex, dutyMax);
         }
         double hi = dutyMax;
         for (int k = GRID - 1; k >= 0; k--) {

@@ -4,7 +4,8 @@ package org.flyloop.averaged;
  * A large-signal simulation case: where it starts, the load resistor, and how the inputs move.
  *
  * @param name              short label for reports
- * @param fromSteadyState   true: start in the equilibrium at the inputs of time 0;
+ * @param fromSteadyState   true: start in the equilibrium at the inputs just before time 0 (so a
+ *                          step at time 0 acts on the steady state);
  *                          false: start with every state at zero (start-up)
  * @param loadResistanceOhm load resistor, Ω
  * @param inputs            the input profile
