@@ -83,7 +83,7 @@ public final class AveragedFlybackCircuit implements AveragedCircuit {
      * Lossless estimate from the ideal conversion ratios (switch resistance and ESR ignored, the
      * rectifier drop kept): CCM M = d/(1 − d), DCM from the energy per cycle ½·Ls·i_pk²·fsw
      * delivered to the output — the standard flyback results (R. W. Erickson, D. Maksimović,
-     * Fundamentals of Power Electronics, 2nd ed., 2001, ch. 6.3 and 5.3 for the buck-boost).
+     * Fundamentals of Power Electronics, 2nd ed., 2001, §6.3.4, and ch. 5 for the DCM buck-boost).
      * In current mode the duty comes from the averaged peak relation at that estimate.
      */
     @Override

@@ -132,8 +132,8 @@ public final class AveragedSwitchNetwork {
         double vo = voutOfRect.applyAsDouble(irect);
         double vl = d * von - d2 * (vo + rectifierDropV);
         double margin = 2 * iL - ipkDcm;
-        double peak = PeakCurrentDutySolver.averagedPeak(iL, d, ion, von, vo + rectifierDropV, margin,
-                ipkDcm, ls, periodS);
+        double peak = PeakCurrentDutySolver.averagedPeak(iL, d, von, vo + rectifierDropV, margin, ipkDcm, ls,
+                periodS);
         return new SwitchCycle(d, d2, margin >= 0 ? ConductionMode.CCM : ConductionMode.DCM, margin,
                 von, ion, peak, irect, vl, vo, d * ion / turns);
     }

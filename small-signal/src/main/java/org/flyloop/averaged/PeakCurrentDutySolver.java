@@ -17,30 +17,34 @@ import org.flyloop.spec.ControlSpec;
  * {@code i_pk,pri = (vc − Se·d·Ts)/Ri} (Ri = control.sense V/A, Se = control.slope V/s); referred
  * to the secondary the commanded peak is {@code N·i_pk,pri}. The peak of the averaged waveform is
  * <pre>
- *   i_pk = i_on + m1·d·Ts/2 + λ·(m2·d′ − m1·d)·d′·Ts/2,   m1 = v_on/Ls, m2 = (v_o + Vf)/Ls, d′ = 1 − d
+ *   DCM:  i_pk = i_pk,DCM = v_on·d·Ts/Ls                      (each cycle starts from zero)
+ *   CCM:  i_pk = iL + m1·d·Ts/2 + λ·(m2·d′ − m1·d)·d′·Ts/2,  m1 = v_on/Ls, m2 = (v_o + Vf)/Ls, d′ = 1 − d
  * </pre>
- * With λ = 1 and i_on = iL (CCM) this is the "more accurate" averaged current-mode relation of
- * R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed., 2001, ch. 12.3:
- * ⟨iL⟩ = i_c − m_a·d·Ts − m1·d²·Ts/2 − m2·d′²·Ts/2. With λ = 0 and i_on = i_pk/2 (DCM) it is the
- * exact DCM peak i_pk = m1·d·Ts, so in DCM the peak relation alone sets d.
+ * With λ = 1 the CCM line is the "more accurate" averaged current-mode relation of
+ * R. W. Erickson, D. Maksimović, Fundamentals of Power Electronics, 2nd ed., 2001, §12.3:
+ * ⟨iL⟩ = i_c − m_a·d·Ts − m1·d²·Ts/2 − m2·d′²·Ts/2. In DCM the peak relation alone sets d.
  *
- * <p>The last term vanishes at equilibrium (volt-second balance m1·d = m2·d′) but not off it, and
- * at the CCM/DCM boundary it would make d jump. λ therefore rises from 0 to 1 with a C¹ smoothstep
- * over the first 1 % of CCM depth q = 2·iL/i_pk,DCM − 1 (the valley at 0 … 0.5 % of the ripple,
- * the load band that {@code ConductionMode.BOUNDARY} already marks as "both models apply"). This
- * blend is our construction, no source; equilibria are unaffected because the term is zero there.
+ * <p>At the boundary iL = i_pk,DCM/2, so the CCM line without its last term equals the DCM peak.
+ * The last term vanishes at equilibrium (volt-second balance m1·d = m2·d′) but not off it, and
+ * would make d jump at the boundary. λ therefore rises from 0 to 1 with a C¹ smoothstep over the
+ * first 1 % of CCM depth q = 2·iL/i_pk,DCM − 1 (valley current up to 0.5 % of the ripple, the load
+ * band that {@code ConductionMode.BOUNDARY} already marks as "both models apply"). This blend is
+ * our construction, no source; equilibria are unaffected because the term is zero there.
  *
- * <p>Solving: f(d) = i_pk(d) − N·(vc − Se·d·Ts)/Ri is convex in CCM (a quadratic with positive
- * curvature, the E&amp;M relation) and increasing in DCM, so the physical duty is its largest root
- * in [0, duty_max] (the one where dI/dd &gt; 0 at equilibrium, i.e. the E&amp;M gain Fm = 1/(Ma·Ts)
- * is positive). Each evaluation first tries the closed-form DCM duty (kept when the cycle at that
- * duty is DCM with d2 &gt; 0, where λ = 0 and the relation is exact), then the bracket [vertex of the CCM quadratic, duty_max]
- * (one root above a point where f &lt; 0, since f is convex there and increasing beyond); failing
- * that it scans f on a 32-point grid from duty_max downward. Brent's method refines the bracket. If f(duty_max) &lt; 0 the controller sits at its duty limit.
- * If f never falls below zero (the magnetizing current already exceeds any commanded peak, only
- * seen far from equilibrium) the duty is the minimiser of f, which is where the two roots merge,
- * keeping d continuous. With Se = 0 the CCM roots merge at equilibrium (Fm unbounded): the model
- * still runs, but its CCM linearization is singular.
+ * <p>Solving f(d) = i_pk(d) − N·(vc − Se·d·Ts)/Ri = 0 in [0, duty_max]: f is convex in CCM (the
+ * E&amp;M quadratic) and increasing in DCM, and for a fixed iL small duties are CCM and large ones
+ * DCM. The physical duty is the largest root, the one with df/dd &gt; 0 (at equilibrium
+ * df/dd = ma·Ts: the E&amp;M gain Fm = 1/(Ma·Ts)). Each evaluation tries, in order:
+ * <ol>
+ *   <li>the closed-form DCM duty (see {@link #dcmDuty}), kept when the cycle there is DCM;</li>
+ *   <li>Brent's method on [vertex of the CCM quadratic, duty_max] when f &lt; 0 at the vertex;</li>
+ *   <li>a 32-point scan of f from duty_max downward, then Brent on the first sign change.</li>
+ * </ol>
+ * If f(duty_max) ≤ 0 the controller sits at its duty limit. If f never falls below zero (the
+ * magnetizing current already exceeds any commanded average, only seen far from equilibrium) the
+ * duty is the minimiser of f, where the two roots merge, which keeps d continuous. With Se = 0 the
+ * CCM roots merge at equilibrium (Fm unbounded): the model still runs, but its CCM linearization is
+ * singular.
  */
 final class PeakCurrentDutySolver {
 
@@ -63,17 +67,22 @@ final class PeakCurrentDutySolver {
     }
 
     /**
-     * Secondary-referred peak of the averaged waveform (class comment).
+     * Secondary-referred peak of the averaged waveform (class comment): in DCM the exact peak of a
+     * cycle that starts from zero, i_pk,DCM (this also covers the rectifier-idle corner d2 = 0);
+     * in CCM the blended E&amp;M relation. The two meet at the boundary, where iL = i_pk,DCM/2.
      *
      * @param secondaryVoltageV v_o + Vf, the winding voltage during demagnetization
      * @param ccmMarginA        2·iL − i_pk,DCM
      */
-    static double averagedPeak(double iL, double d, double ion, double von, double secondaryVoltageV,
-                               double ccmMarginA, double ipkDcm, double ls, double ts) {
-        double base = ion + von * d * ts / (2 * ls);
+    static double averagedPeak(double iL, double d, double von, double secondaryVoltageV, double ccmMarginA,
+                               double ipkDcm, double ls, double ts) {
+        if (ccmMarginA < 0) {
+            return ipkDcm;
+        }
+        double base = iL + von * d * ts / (2 * ls);
         double dp = 1 - d;
         double offEquilibrium = (secondaryVoltageV * dp - von * d) * dp * ts / (2 * ls);
-        double q = ipkDcm > 0 ? ccmMarginA / ipkDcm : (ccmMarginA > 0 ? Double.POSITIVE_INFINITY : -1);
+        double q = ipkDcm > 0 ? ccmMarginA / ipkDcm : Double.POSITIVE_INFINITY;
         return base + blend(q) * offEquilibrium;
     }
 
@@ -124,12 +133,12 @@ final class PeakCurrentDutySolver {
         if (fHigh <= 0) {
             return dutyMax;
         }
-        // Fast path in DCM: with λ = 0 and 0 < d2 < 1 − d the relation is i_pk,DCM(d) = commanded(d),
+        // Fast path in DCM: there the relation is i_pk,DCM(d) = commanded(d),
         // a quadratic in d; f increases through DCM, so a DCM root is the largest one.
         double dDcm = dcmDuty(vc, vinV);
         if (dDcm > 0 && dDcm <= dutyMax) {
             SwitchCycle c = network.atDuty(dDcm, iL, vinV, voutOfRect);
-            if (c.ccmMarginA() < 0 && c.duty2() > 0) {
+            if (c.ccmMarginA() < 0) {
                 return dDcm;
             }
         }

@@ -72,7 +72,7 @@ public final class SpiceNetlistWriter {
                     .append('\n');
             String commanded = "(" + num(n / control.senseVPerA()) + "*(v(nvc)-" + num(control.slopeVPerS())
                     + "*v(nd)*" + num(ts) + "))";
-            String base = "(v(non)+" + von + "*v(nd)*" + num(ts / (2 * ls)) + ")";
+            String base = "(i(Vil)+" + von + "*v(nd)*" + num(ts / (2 * ls)) + ")";
             String offEq = "(((v(out)+" + num(vf) + ")*(1-v(nd))-" + von + "*v(nd))*(1-v(nd))*" + num(ts / (2 * ls))
                     + ")";
             String q = "((2*i(Vil)-" + ipk + ")/" + ipk + ")";
@@ -83,8 +83,8 @@ public final class SpiceNetlistWriter {
                     .append(num(beta)).append(")*(v(nq)/").append(num(beta)).append(")*(3-2*v(nq)/")
                     .append(num(beta)).append("))\n");
             sb.append("* duty node: averaged peak of the waveform equals the commanded peak\n");
-            sb.append("Bduty 0 nd I = ").append(base).append("+v(nlam)*").append(offEq).append('-').append(commanded)
-                    .append('\n');
+            sb.append("Bduty 0 nd I = (v(nq) < 0 ? ").append(ipk).append(" : ").append(base).append("+v(nlam)*")
+                    .append(offEq).append(")-").append(commanded).append('\n');
             sb.append("Rleak nd 0 ").append(num(DUTY_NODE_LEAK_OHM)).append('\n');
         } else {
             sb.append("Vd nd 0 DC ").append(num(u.control())).append(ac(acInput == AveragedInputs.CONTROL, 1))

@@ -49,8 +49,9 @@ class AveragedEquilibriumTest {
 
     @Test
     void dcmWithRectifierDropDeliversTheStoredEnergy() {
-        // Energy balance of a DCM flyback: ½·Ls·i_pk²·fsw = (V + Vf)·V/R, i_pk = Vg′·D·Ts/Ls
-        // (Erickson & Maksimović 2001, §5.3 method applied to the flyback's stored energy), so
+        // Energy conservation in a DCM flyback: each cycle stores ½·Ls·i_pk² (i_pk = Vg′·D·Ts/Ls)
+        // and delivers all of it through the rectifier, ½·Ls·i_pk²·fsw = (V + Vf)·V/R — a
+        // different route from the model's volt-second and charge balances — so
         // V = (−Vf/R + √(Vf²/R² + 4P/R))·R/2.
         StageSpec base = AveragedTestStages.lossless();
         StageSpec stage = new StageSpec(base.vin(), base.vout(), base.iout(), base.fswHz(), base.lm(), base.turns(),

@@ -59,7 +59,8 @@ class AveragedSmallSignalTest {
         //   ⟨iL⟩ = ic − ma·d·Ts − m1·d²·Ts/2 − m2·d′²·Ts/2,  m1 = vg/L, m2 = v/L (flyback, v > 0)
         // perturbed at equilibrium (where m1·D = m2·D′) gives
         //   d̂ = Fm·(îc − îL − Fg·v̂g − Fv·v̂),  Fm = 1/(Ma·Ts), Fg = D²·Ts/(2L), Fv = D′²·Ts/(2L)
-        // (the book's Table 12.2 gains for the buck-boost family, signs for a positive output).
+        // (the book's table of current-programmed controller gains, buck-boost family, with the signs
+        // for a positive output).
         // Secondary-referred: îc = N·v̂c/Ri, Ma = N·Se/Ri. Substituted into the CCM model above.
         ControlSpec control = AveragedTestStages.currentMode();
         AveragedFlybackModel model = new AveragedFlybackModel(STAGE, control);
@@ -103,7 +104,7 @@ class AveragedSmallSignalTest {
         // pole near ω = 2·fsw/D2 and a RHP zero near ω = 2·fsw/D (rad/s). For the lossless
         // flyback the averaged equations give the zero exactly at 2·fsw/D, the poles' sum
         // 2·fsw/D2 + 1/(RC), and the low-frequency pole near 2/(RC) with DC gain V/D (reduced-order
-        // DCM buck-boost, Erickson & Maksimović 2001, Table 11.3).
+        // DCM buck-boost, Erickson & Maksimović 2001, ch. 11).
         AveragedFlybackModel model = new AveragedFlybackModel(STAGE, AveragedTestStages.voltageMode());
         Equilibrium e = model.regulatedEquilibrium(VIN, 0.2);
         assertEquals(ConductionMode.DCM, e.mode());
