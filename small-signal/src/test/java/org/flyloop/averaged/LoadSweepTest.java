@@ -18,9 +18,11 @@ import org.junit.jupiter.params.provider.CsvSource;
  * in voltage mode and far higher in current mode). The model must cross from CCM into DCM by
  * itself, without a failed integration and without a jump in Vout.
  *
- * <p>A jump would show as an isolated second difference of the sampled Vout as large as the
- * first differences; a smooth crossing (Vout is C¹ in time because it follows the capacitor state)
- * keeps the second differences at least an order of magnitude below them. After a hold, Vout must
+ * <p>A jump J on top of the normal per-sample change s shows as a second difference ≈ J next to a
+ * first difference ≈ s + J, so a ratio below 0.25 rules out any jump larger than a third of one
+ * sample's change. A smooth crossing keeps the ratio small: Vout follows the capacitor state, and
+ * only its ESR term kinks where d2 leaves its limit (measured 0.049 in voltage mode, 0.012 in
+ * current mode, with 4000 samples). After a hold, Vout must
  * equal the equilibrium at the final inputs (Newton on the same equations, a different solution
  * path) within 0.1 %.
  */
@@ -67,7 +69,7 @@ class LoadSweepTest {
             secondDiff = Math.max(secondDiff, Math.abs(v[k + 1] - 2 * v[k] + v[k - 1]));
         }
         assertTrue(firstDiff > 0, "Vout moves during the ramp");
-        assertTrue(secondDiff < 0.1 * firstDiff,
+        assertTrue(secondDiff < 0.25 * firstDiff,
                 "second difference " + secondDiff + " V vs first difference " + firstDiff + " V at the crossing");
         assertEquals(light.voutV(), tr.last().voutV(), 1e-3 * light.voutV(), "settled Vout after the sweep");
     }
