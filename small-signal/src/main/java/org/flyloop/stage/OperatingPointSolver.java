@@ -17,14 +17,17 @@ import org.flyloop.spec.StageSpec;
  * Vr = N·(Vout + Vf) with Vf the rectifier drop, Rds the switch on-resistance, R′ = N²·R the
  * load referred to the primary.
  *
- * <p>Two approximations, both second order for realistic parts:
+ * <p>Two approximations, both small for realistic parts:
  * <ul>
  *   <li>The Rds drop is evaluated at the average magnetizing current of the on-interval (so the
  *       on-interval current ramp is taken as straight, not as the exact exponential).</li>
  *   <li>The capacitor ESR does not shift the DC point. In CCM the secondary current is above the
  *       load current during the off-interval, so the ESR raises the average demagnetizing voltage
- *       by about ESR·Iout·D/(1 − D) and the real output sits that much lower at a given D.</li>
+ *       by about ESR·Iout·D/(1 − D) and the real output sits that much lower at a given D; in DCM
+ *       the ESR loss lowers it.</li>
  * </ul>
+ * The cycle-by-cycle simulation in {@code org.flyloop.switching}, which keeps both effects, puts
+ * the resulting error below 0.35 % of vout and 0.2 % of ipk for the example stages in the tests.
  *
  * <p>The conduction mode follows from the CCM solution: CCM when its valley current is positive,
  * DCM otherwise, and {@link ConductionMode#BOUNDARY} when the load lies within 1 % of
@@ -39,7 +42,6 @@ public final class OperatingPointSolver {
 
     private final StageSpec stage;
     private final ControlSpec control;
-    private final BrentSolver brent = new BrentSolver(1e-15, 1e-15);
 
     public OperatingPointSolver(StageSpec stage, ControlSpec control) {
         this.stage = Objects.requireNonNull(stage, "stage");
@@ -130,7 +132,11 @@ public final class OperatingPointSolver {
                 n * ipk, iswRms, irectRms, iinAvg, ioutBoundary, vswMax);
     }
 
-    /** Every corner of vin.corners() × iout.corners(), vin ascending then iout ascending. */
+    /**
+     * Every corner of vin.corners() × iout.corners(), vin ascending then iout ascending.
+     *
+     * @throws InfeasibleOperatingPointException for the first corner the stage cannot run at
+     */
     public List<OperatingPoint> corners() {
         List<OperatingPoint> out = new ArrayList<>();
         for (double vin : stage.vin().corners()) {
@@ -157,7 +163,7 @@ public final class OperatingPointSolver {
         double lm = stage.lm();
         double c = stage.switchResistance() * vr * ts / (2 * lm);
         UnivariateFunction residual = dd -> c * dd * dd + (vin - c + vr) * dd - vr;
-        double d = brent.solve(200, residual, 0, 1);
+        double d = brent().solve(200, residual, 0, 1);
         double im = (1 - d) * vr * ts / (2 * lm);
         return (1 - d) * stage.turns() * im;
     }
@@ -184,7 +190,7 @@ public final class OperatingPointSolver {
         if (g.value(dm) == 0) {
             return dm;
         }
-        return brent.solve(200, g, 0, dm);
+        return brent().solve(200, g, 0, dm);
     }
 
     /**
@@ -207,6 +213,11 @@ public final class OperatingPointSolver {
     /** DCM peak magnetizing current √(2·(Vout + Vf)·Ts·Iout/Lm), A; see {@link #dcmDuty}. */
     private double dcmPeakCurrent(double iout) {
         return Math.sqrt(2 * (stage.vout() + stage.rectifierDrop()) * stage.periodS() * iout / stage.lm());
+    }
+
+    /** A fresh solver per use: Commons Math solvers count evaluations and are not thread-safe. */
+    private static BrentSolver brent() {
+        return new BrentSolver(1e-15, 1e-15);
     }
 
     /** Vr = N·(Vout + Vf), V. */

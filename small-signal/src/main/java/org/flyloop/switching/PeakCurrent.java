@@ -3,7 +3,8 @@ package org.flyloop.switching;
 /**
  * Open-loop peak-current control: the switch turns off when the sensed primary current plus the
  * compensation ramp, senseVPerA·im(t) + slopeVPerS·t (t from the start of the period), reaches
- * {@code controlVoltage}, or at dutyMax·Ts if it never does.
+ * {@code controlVoltage}, or at dutyMax·Ts if it never does. If the sum already exceeds the
+ * threshold at turn-on the switch stays off for that period (no minimum on-time, no blanking).
  *
  * @param controlVoltage comparator threshold, V
  * @param senseVPerA     current-sense gain, V/A
