@@ -18,9 +18,12 @@ import org.apache.commons.math3.complex.Complex;
  * magnitude would bring. The phase is the sum of the factors' arguments, each continuous in ω, so
  * it comes out unwrapped by construction; a negative K contributes −180°.
  *
+ * <p>Polynomial coefficients, where used ({@link #fromPolynomials}, {@link #numeratorPolynomial()}),
+ * are in ascending powers of s, as everywhere in this package (see {@link Polynomial}).
+ *
  * <p>Instances are immutable.
  */
-public final class TransferFunction {
+public final class TransferFunction implements ContinuousPhaseResponse {
 
     /** Default relative tolerance under which a pole and a zero cancel in products. */
     public static final double DEFAULT_CANCELLATION_TOLERANCE = 1e-9;
@@ -59,6 +62,36 @@ public final class TransferFunction {
      */
     public static TransferFunction of(double gain, int integrators, List<Root> zeros, List<Root> poles) {
         return new TransferFunction(gain, integrators, zeros, poles);
+    }
+
+    /**
+     * N(s)/D(s) from polynomial coefficients. Roots come from balanced companion-matrix eigenvalues
+     * after frequency scaling, polished by Newton's method on the given coefficients (see
+     * {@link PolynomialRoots}); exactly-zero low-order coefficients become integrators or
+     * differentiators; near-conjugates are paired; common roots cancel at
+     * {@link #DEFAULT_CANCELLATION_TOLERANCE}. The gain is the exact ratio of the lowest non-zero
+     * coefficients. An m-fold root is recovered as m equal roots when its computed cluster averages
+     * to a root no worse than its members; otherwise its accuracy is the usual ε^(1/m).
+     *
+     * @throws ArithmeticException if the denominator is the zero polynomial
+     */
+    public static TransferFunction fromPolynomials(Polynomial numerator, Polynomial denominator) {
+        if (denominator.isZero()) {
+            throw new ArithmeticException("zero denominator");
+        }
+        if (numerator.isZero()) {
+            return constant(0);
+        }
+        PolynomialRoots.Factorization n = PolynomialRoots.factor(numerator);
+        PolynomialRoots.Factorization d = PolynomialRoots.factor(denominator);
+        return cancel(n.lowestCoefficient() / d.lowestCoefficient(), d.rootsAtOrigin() - n.rootsAtOrigin(),
+                n.roots(), d.roots(), DEFAULT_CANCELLATION_TOLERANCE);
+    }
+
+    /** {@link #fromPolynomials(Polynomial, Polynomial)} from coefficients in ascending powers of s. */
+    public static TransferFunction fromPolynomials(double[] numeratorAscending, double[] denominatorAscending) {
+        return fromPolynomials(Polynomial.ofAscending(numeratorAscending),
+                Polynomial.ofAscending(denominatorAscending));
     }
 
     /** A constant gain. */
@@ -102,6 +135,43 @@ public final class TransferFunction {
         return order(zeros) + Math.max(-integrators, 0);
     }
 
+    /** True when the number of poles is at least the number of zeros (finite gain at infinity). */
+    public boolean isProper() {
+        return relativeDegree() >= 0;
+    }
+
+    /** True when H has a finite value at s = 0, i.e. no net integrators. */
+    public boolean hasFiniteDcGain() {
+        return integrators <= 0;
+    }
+
+    /**
+     * H(0): the gain K without integrators, 0 with differentiators.
+     *
+     * @throws ArithmeticException when H has integrators (infinite DC gain)
+     */
+    public double dcGain() {
+        if (integrators > 0) {
+            throw new ArithmeticException("infinite DC gain: " + integrators + " integrator(s)");
+        }
+        return integrators < 0 ? 0.0 : gain;
+    }
+
+    /**
+     * Numerator N(s) = K · s^max(−n, 0) · Π(1 − s/z), coefficients in ascending powers of s, so that
+     * H = N/D with {@link #denominatorPolynomial()}. Expanding loses the factored form's accuracy
+     * for roots spread over many decades; use for export or cross-checks, not for evaluation.
+     */
+    public Polynomial numeratorPolynomial() {
+        return Polynomial.ofNormalizedFactors(zeros).times(Polynomial.monomial(Math.max(-integrators, 0)))
+                .times(gain);
+    }
+
+    /** Denominator D(s) = s^max(n, 0) · Π(1 − s/p), ascending powers; D has constant term 1 without integrators. */
+    public Polynomial denominatorPolynomial() {
+        return Polynomial.ofNormalizedFactors(poles).times(Polynomial.monomial(Math.max(integrators, 0)));
+    }
+
     /** Count of poles strictly in the open right half-plane (pairs count two). */
     public int rightHalfPlanePoleCount() {
         int n = 0;
@@ -125,6 +195,7 @@ public final class TransferFunction {
      * Evaluates H(jω) at ω = 2π·f into {@code out[0]} (real) and {@code out[1]} (imaginary),
      * without allocating. This is the hot path of loop-gain sweeps.
      */
+    @Override
     public void evaluateInto(double frequencyHz, double[] out) {
         double w = 2 * Math.PI * frequencyHz;
         double re = gain, im = 0;
@@ -176,10 +247,16 @@ public final class TransferFunction {
     }
 
     /** H(j·2π·f) as a complex number. */
+    @Override
     public Complex evaluate(double frequencyHz) {
         double[] out = new double[2];
         evaluateInto(frequencyHz, out);
         return new Complex(out[0], out[1]);
+    }
+
+    /** H(s) at an arbitrary complex s (rad/s); same as {@link #evaluateAt(Complex)}. */
+    public Complex evaluate(Complex s) {
+        return evaluateAt(s);
     }
 
     /** H(s) at an arbitrary complex s (rad/s), straight from the factors. */
@@ -223,6 +300,7 @@ public final class TransferFunction {
      * −180° for a negative gain, −90° per integrator, each real factor within (−90°, 90°), each
      * pair within (−180°, 180°). Continuous in f except where a root lies on the jω axis.
      */
+    @Override
     public double phaseDeg(double frequencyHz) {
         double w = 2 * Math.PI * frequencyHz;
         double ph = gain < 0 ? -Math.PI : 0;
@@ -282,6 +360,52 @@ public final class TransferFunction {
     /** H/G with cancellation at the default tolerance. */
     public TransferFunction dividedBy(TransferFunction other) {
         return times(other.inverse());
+    }
+
+    /**
+     * H + G over the least common denominator (poles shared within the default tolerance appear
+     * once). Only the new numerator is computed: its roots come from the expanded numerator in a
+     * frequency-scaled variable (s = ω·x, ω a power of two near the geometric mean of all root
+     * magnitudes) and are polished against the factored terms, so features from 1 Hz to 1 MHz keep
+     * their relative accuracy.
+     */
+    public TransferFunction plus(TransferFunction other) {
+        return RationalAlgebra.sum(this, other, DEFAULT_CANCELLATION_TOLERANCE);
+    }
+
+    /** H − G; see {@link #plus(TransferFunction)}. */
+    public TransferFunction minus(TransferFunction other) {
+        return plus(other.times(-1.0));
+    }
+
+    /**
+     * The unity negative-feedback closed loop L/(1 + L) of this loop gain L. Zeros of L are kept as
+     * they are; the closed-loop poles are the roots of D + N (with L = N/D), found as in
+     * {@link #plus(TransferFunction)}.
+     *
+     * @throws ArithmeticException if 1 + L vanishes identically
+     */
+    public TransferFunction feedback() {
+        return RationalAlgebra.feedback(this, constant(1), DEFAULT_CANCELLATION_TOLERANCE);
+    }
+
+    /**
+     * G/(1 + G·H) with this as the forward path G and {@code h} in the (negative) feedback path.
+     * Closed-loop zeros are the zeros of G and the poles of H; poles are the roots of Dg·Dh + Ng·Nh.
+     *
+     * @throws ArithmeticException if 1 + G·H vanishes identically
+     */
+    public TransferFunction feedback(TransferFunction h) {
+        return RationalAlgebra.feedback(this, h, DEFAULT_CANCELLATION_TOLERANCE);
+    }
+
+    /**
+     * This function with every pole-zero pair (of the same kind, real or pair) closer than
+     * {@code relativeTolerance} (|z − p| / max(|z|, |p|)) removed; the gain is unchanged because
+     * both factors are normalised to 1 at s = 0.
+     */
+    public TransferFunction withCancellations(double relativeTolerance) {
+        return cancel(gain, integrators, zeros, poles, relativeTolerance);
     }
 
     static TransferFunction cancel(double gain, int integrators, List<Root> zeros, List<Root> poles,

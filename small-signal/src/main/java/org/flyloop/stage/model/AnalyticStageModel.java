@@ -28,8 +28,9 @@ import org.flyloop.stage.OperatingPoint;
  *       Gvd(0) = V/D, ωp = 2/(R·C) (Erickson &amp; Maksimović, ch. 11); its second pole sits near
  *       2·fsw/D2 and its RHP zero near 2·fsw/D (rad/s).</li>
  *   <li><b>Peak current mode, CCM</b>: the duty cycle is eliminated through the linearized
- *       peak-current relation with the compensation ramp and the ripple term kept (DC gain and
- *       output pole then equal the exact periodic steady state); the averaged model's fast
+ *       averaged peak-current relation with the compensation ramp and the ripple terms kept
+ *       (Erickson &amp; Maksimović 2001, §12.3; DC gain and output pole then equal the exact
+ *       periodic steady state); the averaged model's fast
  *       current-loop pole is replaced by Ridley's sampling double pole at ωn = π·fsw with
  *       Qp = 1/(π·(mc·D′ − 0.5)), mc = 1 + Se/Sn (R. B. Ridley, "A new, continuous-time model for
  *       current-mode control", IEEE Trans. Power Electronics 6(2), 1991), which describes the same
@@ -56,8 +57,16 @@ public final class AnalyticStageModel {
         ConductionMode mode = point.isContinuous() ? ConductionMode.CCM : ConductionMode.DCM;
         double r = point.loadResistance();
         boolean current = control.scheme() == ControlScheme.CURRENT;
+        double slope = current ? control.slopeVPerS() : 0;
+        if (current && mode == ConductionMode.CCM) {
+            // With no ramp the averaged relation's duty gain is unbounded (an infinitely fast
+            // current loop); a vanishing ramp keeps the algebra finite and only moves that pole,
+            // which Ridley's sampling pair replaces anyway.
+            double snPrimary = control.senseVPerA() * point.vin() / stage.lm();
+            slope = Math.max(slope, 1e-9 * snPrimary);
+        }
         AveragedEquations eq = new AveragedEquations(stage, mode, r,
-                current ? control.senseVPerA() : 0, current ? control.slopeVPerS() : 0);
+                current ? control.senseVPerA() : 0, slope);
         double iSec = point.imAvg() * stage.turns();
         AveragedEquations.Evaluation e = eq.evaluate(iSec, point.vout(), point.duty(), point.vin(), 0);
 
@@ -79,15 +88,18 @@ public final class AnalyticStageModel {
         double qp = Double.NaN;
         double slopeForUnityQp = Double.NaN;
         TransferFunction gvc;
+        TransferFunction gvcAveraged;
         TransferFunction gvg;
         TransferFunction zout;
         if (!current) {
             gvc = gvd.times(1 / control.rampV());
+            gvcAveraged = gvc;
             gvg = dutyModel.transfer(IN_VIN);
             zout = dutyModel.transfer(IN_LOAD).times(-1);
         } else {
             TwoStateModel cm = eliminateDuty(a, b, c, d, e.threshold().g);
             gvc = cm.transfer(IN_CONTROL);
+            gvcAveraged = gvc;
             gvg = cm.transfer(IN_VIN);
             zout = cm.transfer(IN_LOAD).times(-1);
             if (mode == ConductionMode.CCM) {
@@ -120,7 +132,7 @@ public final class AnalyticStageModel {
                 }
             }
         }
-        return new StageTransferFunctions(point, gvc, gvd, gvg, zout, features, rhpz, qp,
+        return new StageTransferFunctions(point, gvc, gvcAveraged, gvd, gvg, zout, features, rhpz, qp,
                 slopeForUnityQp, warnings);
     }
 

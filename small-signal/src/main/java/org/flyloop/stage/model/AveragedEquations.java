@@ -29,11 +29,13 @@ import org.flyloop.stage.ConductionMode;
  *
  * <p>Peak-current-mode modulator (comparator threshold vc = Ri·i_pk,primary + Se·d·Ts):
  * <pre>
- *   CCM:  vc = Ri·(i/N + v_on·d·Ts/(2·N·Ls)) + Se·d·Ts   (peak = average + half the on-ripple)
- *   DCM:  vc = Ri·P/N + Se·d·Ts                            (the current starts from zero)
+ *   CCM:  vc = (Ri/N)·(i + m1·d²·Ts/2 + m2·d′²·Ts/2) + Se·d·Ts,  m1 = v_on/Ls, m2 = (vo + Vf)/Ls
+ *   DCM:  vc = Ri·P/N + Se·d·Ts                                   (the current starts from zero)
  * </pre>
- * The CCM relation is exact in periodic steady state (the average of a triangular CCM waveform is
- * its mid value), so the DC gain built on it equals the exact cycle's steady state.
+ * The CCM relation is the period average of a waveform that rises with m1 for d·Ts up to the peak
+ * and falls with m2 for d′·Ts (Erickson &amp; Maksimović 2001, §12.3, the "more accurate" averaged
+ * current-mode model). It is exact in periodic steady state, so the DC gain built on it equals the
+ * exact cycle's steady state.
  */
 final class AveragedEquations {
 
@@ -95,11 +97,15 @@ final class AveragedEquations {
             von = vg.minus(di.times(rds));
             d2 = dd.times(-1).plus(1);
             irect = d2.times(di);
-            Dual ripplePrimaryHalf = von.times(dd).times(ts / (2 * turns * ls));
-            threshold = di.dividedBy(turns).plus(ripplePrimaryHalf).times(senseVPerA).plus(slopeTerm);
+            threshold = null;
         }
         double alpha = r / (r + rc);
         Dual vo = dvc.plus(irect.minus(diz).times(rc)).times(alpha);
+        if (threshold == null) {
+            Dual rise = von.times(dd).times(dd).times(ts / (2 * ls));
+            Dual fall = vo.plus(vf).times(d2).times(d2).times(ts / (2 * ls));
+            threshold = di.plus(rise).plus(fall).times(senseVPerA / turns).plus(slopeTerm);
+        }
         Dual didt = dd.times(von).minus(d2.times(vo.plus(vf))).dividedBy(ls);
         Dual dvcdt = irect.minus(vo.dividedBy(r)).minus(diz).dividedBy(stage.cout());
         return new Evaluation(didt, dvcdt, vo, threshold, d2);

@@ -1,0 +1,23 @@
+package org.flyloop.cli.spec;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/** The spec reference in README.md documents every key the loader accepts. */
+class ReadmeKeysTest {
+
+    @Test
+    void everyKeyHasARowInTheReadme() throws IOException {
+        String readme = Files.readString(Path.of("..", "README.md"));
+        for (List<String> keys : List.of(StageSectionReader.KEYS, ControlSectionReader.KEYS)) {
+            for (String key : keys) {
+                assertTrue(readme.contains("| `" + key + "` |"), "README.md has no table row for " + key);
+            }
+        }
+    }
+}
