@@ -27,7 +27,11 @@ final class TargetsSectionReader {
         TargetsSpec d = TargetsSpec.defaults();
         double crossover = d.crossoverHz();
         if (s.has("crossover") && !isAuto(s.node("crossover"))) {
-            crossover = s.quantity("crossover", Unit.HERTZ, Sign.POSITIVE);
+            try {
+                crossover = s.quantity("crossover", Unit.HERTZ, Sign.POSITIVE);
+            } catch (InputException e) {
+                throw new InputException(e.where(), e.problem(), e.accepted() + ", or auto");
+            }
         }
         double phaseMargin = s.has("phase_margin")
                 ? s.labelledNumber("phase_margin", List.of("degrees", "deg", "\u00b0"), Sign.POSITIVE, PHASE_HINT)

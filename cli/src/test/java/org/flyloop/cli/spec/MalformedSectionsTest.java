@@ -92,6 +92,8 @@ class MalformedSectionsTest {
                         "targets.rhp_zero_fraction: must lie in (0, 1], got 2"),
                 bad("zero crossover", GOOD.replace("crossover: 2kHz", "crossover: 0"),
                         "targets.crossover: must be positive, got 0"),
+                bad("crossover as a word", GOOD.replace("crossover: 2kHz", "crossover: fast"),
+                        "targets.crossover: 'fast' is not a number; write hertz, e.g. 65k or 65kHz, or auto"),
                 bad("ambiguous crossover", GOOD.replace("crossover: 2kHz", "crossover: 2M"),
                         "targets.crossover: '2M': M is ambiguous"),
                 bad("unknown targets key", GOOD.replace("phase_margin: 55deg", "phase_margn: 55deg"),
