@@ -54,6 +54,9 @@ final class FeedbackSectionReader {
      */
     static final double MAX_CTR = 10;
 
+    /** Two spellings of one value agree to this relative difference (far below any part tolerance). */
+    private static final double SAME_VALUE_SLACK = 1e-9;
+
     private static final String CTR_HINT = "write a ratio such as 1.0 or a percentage such as 100%, "
             + "one value or [min, max] or [min, nominal, max]";
 
@@ -183,7 +186,8 @@ final class FeedbackSectionReader {
             // feedback.ctr is the spread; parts.ctr the one value a given network uses.
             if (!name.equals(PartNames.CTR) && s.has(name) && s.node(name).isTextual()) {
                 double keyValue = s.quantity(name, PartKeys.unit(name), Sign.POSITIVE);
-                if (keyValue != v) {
+                // Relative slack: 8.06k and 8060 differ in the last bit after scaling.
+                if (Math.abs(keyValue - v) > SAME_VALUE_SLACK * Math.max(Math.abs(keyValue), Math.abs(v))) {
                     throw p.at(name, "differs from feedback." + name + " (" + p.node(name).asText().strip()
                             + " against " + s.node(name).asText().strip() + ")", "give the value once");
                 }

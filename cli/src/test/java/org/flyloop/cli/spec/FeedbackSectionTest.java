@@ -130,6 +130,16 @@ class FeedbackSectionTest {
     }
 
     @Test
+    void aPartRestatingItsKeyInAnotherSpellingIsAccepted() {
+        // 8.06k scales to 8060.000000000001 (8.06 is not exact in binary) while 8060 is exact:
+        // the same value to a part in 1e16.
+        Spec spec = SpecLoader.parse(SpecFixtures.STAGE_AND_CONTROL
+                + "feedback: {amplifier: opamp, r_upper: 8.06k, parts: {r_upper: 8060}}\n", "r.yaml");
+        assertEquals(8060, spec.feedback().parts().get("r_upper"));
+        assertTrue(spec.feedback().rUpper() != 8060, "the spellings do differ in the last bit");
+    }
+
+    @Test
     void noSectionMeansNoFeedback() {
         Spec spec = SpecLoader.parse(SpecFixtures.STAGE_AND_CONTROL, "n.yaml");
         assertNull(spec.feedback());

@@ -10,9 +10,9 @@ import org.flyloop.spec.SeriesSpec;
 import org.flyloop.spec.TargetsSpec;
 import org.flyloop.spec.Tolerance;
 import org.flyloop.spec.TolerancesSpec;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import org.junit.jupiter.api.Test;
 
 /**
  * The targets, series and tolerances sections. Numbers are the fixture's decimals with SI
