@@ -122,6 +122,78 @@ public final class SpecSection {
                 near.map(n -> "did you mean " + n + "? ").orElse("") + accepted);
     }
 
+    /** An optional word out of a fixed set, or {@code defaultWord} when the key is absent. */
+    public String word(String key, List<String> allowed, String defaultWord) {
+        return node.has(key) ? word(key, allowed) : defaultWord;
+    }
+
+    /**
+     * A required number that may carry one of {@code unitWords} after it (e.g. {@code deg},
+     * {@code dB}), compared case-insensitively; engineering suffixes are accepted as for any
+     * number, a percent sign is not (55 % of a degree is never meant).
+     *
+     * @param hint the accepted-forms half of messages, e.g. {@code write degrees, e.g. 55 or 55deg}
+     */
+    public double labelledNumber(String key, List<String> unitWords, Sign sign, String hint) {
+        JsonNode v = node.get(key);
+        if (v == null) {
+            throw missing(key, hint);
+        }
+        if (v.isNull()) {
+            throw at(key, "no value", hint);
+        }
+        if (!v.isTextual()) {
+            throw at(key, "expected a single value, got " + describe(v), hint);
+        }
+        String written = v.asText().strip();
+        String number = written;
+        for (String word : unitWords) {
+            if (number.regionMatches(true, number.length() - word.length(), word, 0, word.length())) {
+                number = number.substring(0, number.length() - word.length()).strip();
+                break;
+            }
+        }
+        if (number.contains("%")) {
+            throw at(key, "a percentage does not fit here, got " + written, hint);
+        }
+        double value;
+        try {
+            value = QuantityParser.parse(number, Unit.DIMENSIONLESS);
+        } catch (QuantityFormatException e) {
+            throw at(key, e.problem(), hint);
+        }
+        if (!sign.admits(value)) {
+            throw at(key, "must be " + sign.word() + ", got " + written, hint);
+        }
+        return value;
+    }
+
+    /** The raw node of a key (null when absent), for values with a shape of their own. */
+    public JsonNode node(String key) {
+        return node.get(key);
+    }
+
+    /**
+     * One value of a list or other composite, parsed as a quantity but not sign-checked.
+     *
+     * @param itemKey the key path below this section used in messages, e.g. {@code lm[0]}
+     */
+    public double item(String itemKey, JsonNode value, Unit unit) {
+        return scalarQuantity(itemKey, value, unit);
+    }
+
+    /** A nested mapping of this section as a section of its own, e.g. {@code feedback.parts}. */
+    public SpecSection child(String key, List<String> childKeys) {
+        return new SpecSection(source, childPath(key), node.get(key), childKeys);
+    }
+
+    /** The keys present, in file order. */
+    public List<String> presentKeys() {
+        List<String> keys = new ArrayList<>();
+        node.fieldNames().forEachRemaining(keys::add);
+        return keys;
+    }
+
     /** Optional free text, one line; empty when absent. */
     public String text(String key) {
         JsonNode v = node.get(key);
