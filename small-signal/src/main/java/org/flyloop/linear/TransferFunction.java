@@ -449,31 +449,10 @@ public final class TransferFunction implements ContinuousPhaseResponse {
         return cancel(gain, integrators, zeros, poles, relativeTolerance);
     }
 
+    /** Builds a transfer function with pole-zero pairs within {@code tol} removed; see {@link RationalAlgebra}. */
     static TransferFunction cancel(double gain, int integrators, List<Root> zeros, List<Root> poles,
                                    double tol) {
-        List<Root> z = new ArrayList<>(zeros);
-        List<Root> p = new ArrayList<>(poles);
-        for (int i = z.size() - 1; i >= 0; i--) {
-            Root zi = z.get(i);
-            int best = -1;
-            double bestD = tol;
-            for (int j = 0; j < p.size(); j++) {
-                Root pj = p.get(j);
-                if (pj.isPair() != zi.isPair()) {
-                    continue;
-                }
-                double d = zi.relativeDistance(pj);
-                if (d <= bestD) {
-                    bestD = d;
-                    best = j;
-                }
-            }
-            if (best >= 0) {
-                z.remove(i);
-                p.remove(best);
-            }
-        }
-        return new TransferFunction(gain, integrators, z, p);
+        return RationalAlgebra.cancel(gain, integrators, zeros, poles, tol);
     }
 
     @Override
