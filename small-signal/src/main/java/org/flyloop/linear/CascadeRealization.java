@@ -52,6 +52,7 @@ final class CascadeRealization {
         }
     }
 
+    /** The cascade realisation of a proper h; a static gain for h without poles. */
     static StateSpace realize(TransferFunction h) {
         if (!h.isProper()) {
             throw new IllegalArgumentException("an improper transfer function has no state-space model: " + h);

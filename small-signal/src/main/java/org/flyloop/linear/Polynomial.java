@@ -91,6 +91,7 @@ public final class Polynomial {
         return power < c.length ? c[power] : 0.0;
     }
 
+    /** Highest power with a non-zero coefficient (0 for constants, including zero). */
     public int degree() {
         return c.length - 1;
     }
@@ -111,6 +112,7 @@ public final class Polynomial {
         return k;
     }
 
+    /** Coefficient-wise sum. */
     public Polynomial plus(Polynomial other) {
         double[] r = new double[Math.max(c.length, other.c.length)];
         for (int i = 0; i < r.length; i++) {
@@ -119,10 +121,12 @@ public final class Polynomial {
         return ofAscending(r);
     }
 
+    /** Coefficient-wise difference. */
     public Polynomial minus(Polynomial other) {
         return plus(other.times(-1.0));
     }
 
+    /** Every coefficient multiplied by k. */
     public Polynomial times(double k) {
         double[] r = new double[c.length];
         for (int i = 0; i < r.length; i++) {
@@ -131,6 +135,7 @@ public final class Polynomial {
         return ofAscending(r);
     }
 
+    /** Product by convolution of the coefficient sequences: c_k = Σ a_i·b_(k−i). */
     public Polynomial times(Polynomial other) {
         double[] r = new double[c.length + other.c.length - 1];
         for (int i = 0; i < c.length; i++) {

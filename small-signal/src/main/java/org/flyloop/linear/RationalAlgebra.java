@@ -88,6 +88,37 @@ final class RationalAlgebra {
                 tolerance);
     }
 
+    /**
+     * Removes every zero whose relative distance to a pole of the same kind (real or pair) is at
+     * most {@code tol}, together with that pole; both factors equal 1 at s = 0, so the gain stays.
+     */
+    static TransferFunction cancel(double gain, int integrators, List<Root> zeros, List<Root> poles,
+                                   double tol) {
+        List<Root> z = new ArrayList<>(zeros);
+        List<Root> p = new ArrayList<>(poles);
+        for (int i = z.size() - 1; i >= 0; i--) {
+            Root zi = z.get(i);
+            int best = -1;
+            double bestD = tol;
+            for (int j = 0; j < p.size(); j++) {
+                Root pj = p.get(j);
+                if (pj.isPair() != zi.isPair()) {
+                    continue;
+                }
+                double d = zi.relativeDistance(pj);
+                if (d <= bestD) {
+                    bestD = d;
+                    best = j;
+                }
+            }
+            if (best >= 0) {
+                z.remove(i);
+                p.remove(best);
+            }
+        }
+        return TransferFunction.of(gain, integrators, z, p);
+    }
+
     private static int nearest(List<Root> candidates, Root r, double tolerance) {
         int best = -1;
         double bestD = tolerance;

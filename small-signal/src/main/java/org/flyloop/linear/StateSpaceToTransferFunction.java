@@ -39,6 +39,7 @@ final class StateSpaceToTransferFunction {
     private StateSpaceToTransferFunction() {
     }
 
+    /** Factored form of a single-input single-output model (see the class description). */
     static TransferFunction convert(StateSpace siso) {
         int n = siso.stateCount();
         double d = siso.d().get(0, 0);

@@ -32,8 +32,9 @@ public final class TransferFunction implements ContinuousPhaseResponse {
     private final int integrators;
     private final List<Root> zeros;
     private final List<Root> poles;
-    // Flattened copies for the hot evaluation loop.
-    private final double[] zRe, zIm, pRe, pIm;
+    // Hot-loop coefficients: each factor at s = jω is (1 − a2·ω²) + j·a1·ω, i.e. a1 = −1/r,
+    // a2 = 0 for a real root and a1 = −2·Re r/|r|², a2 = 1/|r|² for a pair.
+    private final double[] zA1, zA2, pA1, pA2;
 
     private TransferFunction(double gain, int integrators, List<Root> zeros, List<Root> poles) {
         if (!Double.isFinite(gain)) {
@@ -43,18 +44,28 @@ public final class TransferFunction implements ContinuousPhaseResponse {
         this.integrators = integrators;
         this.zeros = Collections.unmodifiableList(new ArrayList<>(zeros));
         this.poles = Collections.unmodifiableList(new ArrayList<>(poles));
-        zRe = new double[zeros.size()];
-        zIm = new double[zeros.size()];
-        for (int i = 0; i < zeros.size(); i++) {
-            zRe[i] = zeros.get(i).re();
-            zIm[i] = zeros.get(i).im();
+        zA1 = firstOrderCoefficients(zeros);
+        zA2 = secondOrderCoefficients(zeros);
+        pA1 = firstOrderCoefficients(poles);
+        pA2 = secondOrderCoefficients(poles);
+    }
+
+    private static double[] firstOrderCoefficients(List<Root> roots) {
+        double[] a = new double[roots.size()];
+        for (int i = 0; i < a.length; i++) {
+            Root r = roots.get(i);
+            a[i] = r.isPair() ? -2 * r.re() / (r.re() * r.re() + r.im() * r.im()) : -1 / r.re();
         }
-        pRe = new double[poles.size()];
-        pIm = new double[poles.size()];
-        for (int i = 0; i < poles.size(); i++) {
-            pRe[i] = poles.get(i).re();
-            pIm[i] = poles.get(i).im();
+        return a;
+    }
+
+    private static double[] secondOrderCoefficients(List<Root> roots) {
+        double[] a = new double[roots.size()];
+        for (int i = 0; i < a.length; i++) {
+            Root r = roots.get(i);
+            a[i] = r.isPair() ? 1 / (r.re() * r.re() + r.im() * r.im()) : 0.0;
         }
+        return a;
     }
 
     /**
@@ -198,49 +209,79 @@ public final class TransferFunction implements ContinuousPhaseResponse {
     @Override
     public void evaluateInto(double frequencyHz, double[] out) {
         double w = 2 * Math.PI * frequencyHz;
+        double w2 = w * w;
+        // numerator and denominator products, one complex division at the end
+        double nr = gain, ni = 0;
+        for (int i = 0; i < zA1.length; i++) {
+            double fr = 1 - zA2[i] * w2;
+            double fi = zA1[i] * w;
+            double t = nr * fr - ni * fi;
+            ni = nr * fi + ni * fr;
+            nr = t;
+        }
+        double dr = 1, di = 0;
+        for (int i = 0; i < pA1.length; i++) {
+            double fr = 1 - pA2[i] * w2;
+            double fi = pA1[i] * w;
+            double t = dr * fr - di * fi;
+            di = dr * fi + di * fr;
+            dr = t;
+        }
+        double d = dr * dr + di * di;
+        double re = (nr * dr + ni * di) / d;
+        double im = (ni * dr - nr * di) / d;
+        if (!Double.isFinite(re) || !Double.isFinite(im) || !(d > 0) || !Double.isFinite(d)) {
+            // products over- or underflowed (dozens of roots far apart): divide factor by factor
+            evaluateStepwise(w, out);
+            return;
+        }
+        out[0] = re;
+        out[1] = im;
+        applyIntegrators(w, out);
+    }
+
+    /** Same value as {@link #evaluateInto}, dividing by each pole factor in turn (no overflow). */
+    private void evaluateStepwise(double w, double[] out) {
+        double w2 = w * w;
         double re = gain, im = 0;
-        for (int i = 0; i < zRe.length; i++) {
-            double fr, fi;
-            if (zIm[i] == 0) {
-                fr = 1;
-                fi = -w / zRe[i];
-            } else {
-                double m2 = zRe[i] * zRe[i] + zIm[i] * zIm[i];
-                fr = 1 - w * w / m2;
-                fi = -2 * zRe[i] * w / m2;
-            }
+        for (int i = 0; i < zA1.length; i++) {
+            double fr = 1 - zA2[i] * w2;
+            double fi = zA1[i] * w;
             double t = re * fr - im * fi;
             im = re * fi + im * fr;
             re = t;
         }
-        for (int i = 0; i < pRe.length; i++) {
-            double fr, fi;
-            if (pIm[i] == 0) {
-                fr = 1;
-                fi = -w / pRe[i];
-            } else {
-                double m2 = pRe[i] * pRe[i] + pIm[i] * pIm[i];
-                fr = 1 - w * w / m2;
-                fi = -2 * pRe[i] * w / m2;
-            }
-            // divide (re + j im) by (fr + j fi)
+        for (int i = 0; i < pA1.length; i++) {
+            double fr = 1 - pA2[i] * w2;
+            double fi = pA1[i] * w;
             double d = fr * fr + fi * fi;
             double t = (re * fr + im * fi) / d;
             im = (im * fr - re * fi) / d;
             re = t;
         }
+        out[0] = re;
+        out[1] = im;
+        applyIntegrators(w, out);
+    }
+
+    /** Multiplies out[] by (jω)^(−n). */
+    private void applyIntegrators(double w, double[] out) {
         int n = integrators;
-        // multiply by (jω)^(−n)
-        if (n != 0) {
-            double mag = Math.pow(w, -n);
-            re *= mag;
-            im *= mag;
-            int k = Math.floorMod(-n, 4); // j^k
-            for (int i = 0; i < k; i++) {
-                double t = -im;
-                im = re;
-                re = t;
-            }
+        if (n == 0) {
+            return;
+        }
+        double wn = 1;
+        for (int i = 0; i < Math.abs(n); i++) {
+            wn *= w;
+        }
+        double mag = n > 0 ? 1 / wn : wn;
+        double re = out[0] * mag;
+        double im = out[1] * mag;
+        int k = Math.floorMod(-n, 4); // j^k
+        for (int i = 0; i < k; i++) {
+            double t = -im;
+            im = re;
+            re = t;
         }
         out[0] = re;
         out[1] = im;
@@ -408,31 +449,10 @@ public final class TransferFunction implements ContinuousPhaseResponse {
         return cancel(gain, integrators, zeros, poles, relativeTolerance);
     }
 
+    /** Builds a transfer function with pole-zero pairs within {@code tol} removed; see {@link RationalAlgebra}. */
     static TransferFunction cancel(double gain, int integrators, List<Root> zeros, List<Root> poles,
                                    double tol) {
-        List<Root> z = new ArrayList<>(zeros);
-        List<Root> p = new ArrayList<>(poles);
-        for (int i = z.size() - 1; i >= 0; i--) {
-            Root zi = z.get(i);
-            int best = -1;
-            double bestD = tol;
-            for (int j = 0; j < p.size(); j++) {
-                Root pj = p.get(j);
-                if (pj.isPair() != zi.isPair()) {
-                    continue;
-                }
-                double d = zi.relativeDistance(pj);
-                if (d <= bestD) {
-                    bestD = d;
-                    best = j;
-                }
-            }
-            if (best >= 0) {
-                z.remove(i);
-                p.remove(best);
-            }
-        }
-        return new TransferFunction(gain, integrators, z, p);
+        return RationalAlgebra.cancel(gain, integrators, zeros, poles, tol);
     }
 
     @Override

@@ -74,4 +74,38 @@ class TransferFunctionPhaseTest {
         org.junit.jupiter.api.Assertions.assertThrows(ArithmeticException.class,
                 () -> TransferFunction.integrators(4, 1).dcGain());
     }
+
+    @Test
+    void manyFactorsNeitherOverflowNorLoseAccuracy() {
+        // 1e300 / (1 + s/ω1)^70 with ω1 = 2π·1 Hz, at 1e5 Hz: the pole product alone is ~1e350 (overflow),
+        // the value is |H| = 1e300·(1 + 1e10)^(−35), arg H = −70·atan(1e5).
+        List<Root> poles = new java.util.ArrayList<>();
+        for (int i = 0; i < 70; i++) {
+            poles.add(Root.realAtHz(1));
+        }
+        TransferFunction h = TransferFunction.of(1e300, 0, List.of(), poles);
+        double log10Mag = 300 - 35 * Math.log10(1 + 1e10);
+        double[] out = new double[2];
+        h.evaluateInto(1e5, out);
+        assertEquals(log10Mag, Math.log10(Math.hypot(out[0], out[1])), 1e-12);
+        double expectedPhase = -70 * Math.toDegrees(Math.atan(1e5));
+        assertEquals(PhaseUnwrapper.wrapDeg(expectedPhase), Math.toDegrees(Math.atan2(out[1], out[0])), 1e-9);
+        assertEquals(expectedPhase, h.phaseDeg(1e5), 1e-9);
+    }
+
+    @Test
+    void pointwiseProductKeepsContinuousPhase() {
+        // The product of responses equals the factored product; its phase is the sum of the phases.
+        TransferFunction a = TransferFunction.integrators(10, 2);
+        TransferFunction b = TransferFunction.of(-1, 0, List.of(Root.realAtHz(30)), List.of(Root.pairAtHz(1e3, 3)));
+        ComplexResponse product = ComplexResponse.product(a, b);
+        assertTrue(product instanceof ContinuousPhaseResponse);
+        TransferFunction exact = a.times(b);
+        for (double f : TestSystems.logSpace(1, 1e5, 21)) {
+            assertEquals(0, product.evaluate(f).subtract(exact.evaluate(f)).abs() / exact.magnitude(f), 1e-14);
+            assertEquals(exact.phaseDeg(f), ((ContinuousPhaseResponse) product).phaseDeg(f), 1e-12);
+        }
+        ComplexResponse bare = ComplexResponse.product(a::evaluateInto, b);
+        assertTrue(!(bare instanceof ContinuousPhaseResponse));
+    }
 }
