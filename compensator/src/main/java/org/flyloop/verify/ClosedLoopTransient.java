@@ -3,6 +3,7 @@ package org.flyloop.verify;
 import java.util.List;
 import java.util.Locale;
 import org.flyloop.averaged.ModeChange;
+import org.flyloop.loop.LoadStepResponse;
 
 /**
  * The result of a closed-loop averaged simulation: samples at the requested times, located
@@ -36,6 +37,17 @@ public record ClosedLoopTransient(String scenarioName, ClosedLoopEquilibrium sta
     public double[] voutDeviationV() {
         double before = start.voutV();
         return samples.stream().mapToDouble(s -> s.voutV() - before).toArray();
+    }
+
+    /**
+     * Peak and settling of the output deviation, reduced exactly as the linear prediction is
+     * ({@link LoadStepResponse#of}; the final value is the last sample).
+     *
+     * @param stepA         the disturbance's load step, A (recorded only)
+     * @param settlingBandV half-width of the settling band, V
+     */
+    public LoadStepResponse deviationResponse(double stepA, double settlingBandV) {
+        return LoadStepResponse.of(timeS(), voutDeviationV(), stepA, settlingBandV);
     }
 
     /** True when any sample, or any instant between samples, had the control law in a clamp. */

@@ -62,12 +62,11 @@ public record LoadStepComparison(double vinV, double ioutFromA, double ioutToA, 
                         windowS);
         double[] t = linear.timesS();
         ClosedLoopTransient averagedRun = sim.loadStep(vinV, ioutFromA, ioutToA, t);
-        double[] dvAveraged = averagedRun.voutDeviationV();
-        LoadStepResponse averaged = LoadStepResponse.of(t, dvAveraged, stepA, linear.settlingBandV());
+        LoadStepResponse averaged = averagedRun.deviationResponse(stepA, linear.settlingBandV());
         double peakBand = PEAK_BAND_FRACTION * Math.abs(linear.peakDeviationV());
         return new LoadStepComparison(vinV, ioutFromA, ioutToA, stageModel, loop, linear, averaged,
                 LoadStepResponse.of(t, linear.deviationV(), stepA, peakBand),
-                LoadStepResponse.of(t, dvAveraged, stepA, peakBand), averagedRun);
+                averagedRun.deviationResponse(stepA, peakBand), averagedRun);
     }
 
     /** The common sample times, s. */
