@@ -222,6 +222,8 @@ public final class StageCommand implements Callable<Integer> {
         } catch (InfeasibleOperatingPointException e) {
             throw new InputException("--transient", "the averaged model cannot hold the output before the step: "
                     + e.getMessage(), null);
+        } catch (RuntimeException e) {
+            throw new IllegalStateException("averaged model, steady state before the step at " + at(p) + ": " + e, e);
         }
         double windowS = transientOptions.windowS();
         if (Double.isNaN(windowS)) {
@@ -307,6 +309,9 @@ public final class StageCommand implements Callable<Integer> {
                 } catch (InfeasibleOperatingPointException e) {
                     throw new InputException(option, "the averaged model cannot hold the output at " + at(p) + ": "
                             + e.getMessage(), null);
+                } catch (RuntimeException e) {
+                    // a solver failure inside the model is flyloop's fault, not the user's: say where
+                    throw new IllegalStateException("averaged model, regulated equilibrium at " + at(p) + ": " + e, e);
                 }
                 regulated.put(key, eq);
             }

@@ -56,7 +56,7 @@ public final class StageTransientOptions {
     private static final Pattern PERCENT = Pattern.compile("[0-9.]+(?:[eE][+-]?[0-9]+)?%");
 
     @Option(names = "--transient", paramLabel = "STEP",
-            description = "Open-loop averaged-model step: duty-step:+2%, control-step:+2%, load-step:50%..100%"
+            description = "Open-loop averaged-model step: duty-step:+2%%, control-step:+2%%, load-step:50%%..100%%"
                     + " or line-step:300..350 (needs --csv).")
     private String stepText;
 

@@ -98,6 +98,10 @@ class StageBodeTest {
         assertEquals(BOTH, csv.header());
         assertEquals(50e3, csv.column("freq_hz")[csv.rows().size() - 1], 0);
         assertDiffColumns(csv);
+        double worstDb = csv.rows().stream().mapToDouble(r -> Math.abs(r[5])).max().orElseThrow();
+        double worstDeg = csv.rows().stream().mapToDouble(r -> Math.abs(r[6])).max().orElseThrow();
+        System.out.printf("stage --bode --model both, voltage-mode CCM: worst %.3g dB, %.3g° to fsw/2%n", worstDb,
+                worstDeg);
         for (double[] r : csv.rows()) {
             assertTrue(Math.abs(r[5]) < 0.1, "dB difference at " + r[0] + " Hz: " + r[5]);
             assertTrue(Math.abs(r[6]) < 0.5, "phase difference at " + r[0] + " Hz: " + r[6]);
@@ -150,6 +154,8 @@ class StageBodeTest {
                 worstNearHalf = Math.max(worstNearHalf, Math.abs(r[6]));
             }
         }
+        System.out.printf("stage --bode --model both, current-mode CCM: %.3g° below fsw/10, %.3g° up to fsw/2%n",
+                worstBelow, worstNearHalf);
         assertTrue(worstBelow < 5, "phase difference below fsw/10: " + worstBelow);
         assertTrue(worstNearHalf > 20, "the sampling pair shows near fsw/2: " + worstNearHalf);
         double[] phase = csv.column("analytic_phase_deg");
