@@ -192,19 +192,19 @@ public final class StageCommand implements Callable<Integer> {
             Equilibrium eq = averaged.regulated(p, "--model");
             fromAveraged = FrequencyResponse.of(quantity.averaged(averaged.model.linearize(eq), spec.control()), grid);
             if (spec.control().scheme() == ControlScheme.CURRENT) {
-                notes.add("the averaged model has no current-loop sampling effect (Ridley's double pole at fsw/2);"
-                        + " expect it to part from the analytic control-to-output response above about fsw/10");
+                notes.add("current mode: the averaged model has no current-loop sampling effect (no double pole at"
+                        + " fsw/2, Ridley 1991); read it only up to about fsw/10");
             }
         }
         String csv = model == Model.BOTH ? BodeCsv.compared(fromAnalytic, fromAveraged)
                 : BodeCsv.single(model == Model.ANALYTIC ? fromAnalytic : fromAveraged);
         output.file(bodeOptions.file(), csv);
-        String models1 = switch (model) {
+        String source = switch (model) {
             case ANALYTIC -> "analytic model";
             case AVERAGED -> "averaged model (numerical linearization)";
             case BOTH -> "analytic and averaged models with their difference";
         };
-        return new StageModelFile(bodeOptions.file().toString(), "bode", quantity.description() + ", " + models1
+        return new StageModelFile(bodeOptions.file().toString(), "bode", quantity.description() + ", " + source
                 + ", " + at(p) + ", " + StageModelTable.engineering(grid.lowHz()) + "Hz to "
                 + StageModelTable.engineering(grid.highHz()) + "Hz, " + grid.size() + " points");
     }

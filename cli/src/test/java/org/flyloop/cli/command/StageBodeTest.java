@@ -140,7 +140,8 @@ class StageBodeTest {
                 "--bode", file.toString(), "--model", "both", "--freq", "10..1meg");
         assertEquals(0, run.exitCode(), run.err());
         assertEquals(1, run.errLines().length, run.err());
-        assertTrue(run.err().startsWith("flyloop: note: the averaged model has no current-loop sampling effect"));
+        assertTrue(run.err().startsWith("flyloop: note: current mode: the averaged model has no current-loop sampling"
+                + " effect"), run.err());
         Csv csv = Csv.read(file);
         assertDiffColumns(csv);
         double fsw = 65e3;
