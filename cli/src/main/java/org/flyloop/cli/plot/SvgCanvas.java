@@ -1,6 +1,5 @@
 package org.flyloop.cli.plot;
 
-import java.util.Locale;
 import java.util.Map;
 
 /**
@@ -164,16 +163,29 @@ public final class SvgCanvas implements Canvas {
         body.append(" stroke-linejoin=\"round\"");
     }
 
-    /** Fixed two decimals, trailing zeros dropped; never an exponent. */
+    /** Fixed two decimals, trailing zeros dropped; never an exponent. Hand-rolled: it runs per point. */
     static String num(double v) {
         if (!Double.isFinite(v)) {
             throw new IllegalArgumentException("non-finite coordinate " + v);
         }
-        String s = String.format(Locale.ROOT, "%.2f", v);
-        if (s.indexOf('.') >= 0) {
-            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        long hundredths = Math.round(v * 100);
+        if (hundredths == 0) {
+            return "0";
         }
-        return s.equals("-0") ? "0" : s;
+        StringBuilder b = new StringBuilder(12);
+        if (hundredths < 0) {
+            b.append('-');
+            hundredths = -hundredths;
+        }
+        b.append(hundredths / 100);
+        long frac = hundredths % 100;
+        if (frac != 0) {
+            b.append('.').append(frac / 10);
+            if (frac % 10 != 0) {
+                b.append(frac % 10);
+            }
+        }
+        return b.toString();
     }
 
     /** XML escaping for text and attribute values. */
