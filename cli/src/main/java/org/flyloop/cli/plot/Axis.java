@@ -50,9 +50,10 @@ final class Axis {
     }
 
     /**
-     * Fits an axis around [dataMin, dataMax]. LOG widens to whole decades; DECIBEL, DEGREE and
-     * LINEAR with {@code pad} widen by 3 % and then to whole steps, picking the finest step that
-     * gives at most {@code maxIntervals} intervals; LINEAR without pad keeps the data range.
+     * Fits an axis around [dataMin, dataMax]. LOG widens to whole decades; with {@code pad},
+     * DECIBEL and DEGREE widen to whole steps and LINEAR by 3 % and then to whole steps, picking the
+     * finest step that gives at most {@code maxIntervals} intervals; without pad the data range is
+     * kept.
      */
     static Axis fit(Scale scale, double dataMin, double dataMax, String unit, double pxAtMin, double pxAtMax,
                     int maxIntervals, boolean pad) {
@@ -74,8 +75,10 @@ final class Axis {
             dataMax += half;
         }
         double span = dataMax - dataMin;
-        double lo = pad ? dataMin - 0.03 * span : dataMin;
-        double hi = pad ? dataMax + 0.03 * span : dataMax;
+        // Decibel and degree steps are coarse enough to leave room by themselves.
+        double margin = pad && scale == Scale.LINEAR ? 0.03 * span : 0;
+        double lo = dataMin - margin;
+        double hi = dataMax + margin;
         double s = chooseStep(scale, lo, hi, maxIntervals);
         if (pad) {
             lo = Math.floor(lo / s + 1e-9) * s;
