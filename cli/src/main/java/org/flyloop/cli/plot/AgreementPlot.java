@@ -25,7 +25,8 @@ public final class AgreementPlot {
         double[] dDeg = d.differenceDeg();
         String name = d.model().name();
         Panel magnitude = Panel.of("magnitude", "magnitude", "dB", Scale.DECIBEL, mag);
-        Panel phasePanel = new Panel("phase", "phase", "°", Scale.DEGREE, phase, List.of(), List.of(), List.of(), 0.85, 0);
+        Panel phasePanel = new Panel("phase", "phase", "°", Scale.DEGREE, phase, List.of(), List.of(), List.of(),
+                0.85, 0);
         Panel diffDb = new Panel("difference-magnitude", "Δ magnitude", "dB", Scale.LINEAR,
                 List.of(new Trace(name, f, dDb, d.model().emphasis())), worst(d, f, dDb, "dB", 2),
                 List.of(ReferenceLine.guide(0)), List.of(), 0.6, 1);

@@ -17,7 +17,8 @@ final class Glyphs {
                     outline, fill);
             case TRIANGLE_DOWN -> c.polygon(new double[] {x, x + r, x - r},
                     new double[] {y + r, y - 0.8 * r, y - 0.8 * r}, outline, fill);
-            case DIAMOND -> c.polygon(new double[] {x, x + r, x, x - r}, new double[] {y - r * 1.15, y, y + r * 1.15, y},
+            case DIAMOND -> c.polygon(new double[] {x, x + r, x, x - r},
+                    new double[] {y - r * 1.15, y, y + r * 1.15, y},
                     outline, fill);
             case PLUS -> {
                 LineStyle s = outline != null ? outline : LineStyle.solid(1.2, fill);

@@ -154,7 +154,8 @@ public final class DesignCurves {
             }
         }
         return BodeData.of("Closed loop: reference to output", "T/(1 + T), normalised to its DC value", traces)
-                .withMarkers(marks).withVerticals(limits(r)).withGuides(List.of(ReferenceLine.guide(-3, "−3 dB")), List.of());
+                .withMarkers(marks).withVerticals(limits(r))
+                .withGuides(List.of(ReferenceLine.guide(-3, "−3 dB")), List.of());
     }
 
     /**

@@ -112,7 +112,8 @@ public final class HtmlPage implements ReportPart {
     }
 
     private static boolean looksNumeric(String cell) {
-        return !cell.isEmpty() && (Character.isDigit(cell.charAt(0)) || cell.charAt(0) == '−' || cell.charAt(0) == '+')
+        return !cell.isEmpty()
+                && (Character.isDigit(cell.charAt(0)) || cell.charAt(0) == '−' || cell.charAt(0) == '+')
                 && cell.length() < 24;
     }
 

@@ -36,7 +36,8 @@ public final class ReportOutline {
         List<Section> s = new ArrayList<>();
         s.add(verdict(r));
         s.add(new Section("spec", "Specification as understood", List.of(
-                new Block.Table("Every value in SI units, as read from the spec", List.of("section", "quantity", "value"),
+                new Block.Table("Every value in SI units, as read from the spec",
+                        List.of("section", "quantity", "value"),
                         SpecRows.of(r.request(), r.placement().type(), r.placement().crossoverHz())))));
         s.add(operatingPoints(r));
         s.add(stage(in));
@@ -47,7 +48,8 @@ public final class ReportOutline {
         List<String> warnings = new ArrayList<>(r.warnings());
         warnings.addAll(in.notes());
         s.add(new Section("warnings", "Warnings", warnings.isEmpty()
-                ? List.of(new Block.Paragraph("No warnings.", Block.Tone.PASS)) : List.of(new Block.Bullets(warnings))));
+                ? List.of(new Block.Paragraph("No warnings.", Block.Tone.PASS))
+                : List.of(new Block.Bullets(warnings))));
         s.add(rulesOfThumb(in));
         s.add(new Section("safety", "Safety", List.of(new Block.Paragraph(SAFETY, Block.Tone.CAUTION))));
         s.add(new Section("averaged-model", "About the averaged model",
