@@ -1,6 +1,8 @@
 package org.flyloop.cli.plot;
 
+import java.awt.Graphics2D;
 import java.util.Map;
+import java.util.function.Function;
 
 /**
  * A drawing surface in figure pixels, origin top left, y downwards. Two implementations draw the
@@ -30,6 +32,15 @@ public interface Canvas {
 
     /** Text with its anchor point on the baseline at (x, y). */
     void text(double x, double y, String text, TextStyle style);
+
+    /**
+     * Lets a Java2D painter (a chart library) draw into the box at ({@code x}, {@code y}) of size
+     * {@code width} × {@code height}, in box-local pixels. The painter returns data attributes that
+     * the SVG back end writes on a group of class {@code cssClass} around the drawing (values that
+     * are only known once the painter has laid itself out, such as plot-area pixels).
+     */
+    void java2d(String cssClass, double x, double y, double width, double height,
+                Function<Graphics2D, Map<String, String>> painter);
 
     /** Advance width of {@code text} in figure pixels, the same for both back ends. */
     default double textWidth(String text, TextStyle style) {

@@ -1,6 +1,8 @@
 package org.flyloop.cli.plot;
 
+import java.awt.Color;
 import java.util.regex.Pattern;
+import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
  * flyloop's figure look, in one place: fonts, inks, line weights and the per-trace styles. Built
@@ -83,6 +85,50 @@ public final class PlotTheme {
         if (System.getProperty("java.awt.headless") == null) {
             System.setProperty("java.awt.headless", "true");
         }
+    }
+
+    /** A {@code #rrggbb} colour as an AWT colour. */
+    public static Color color(String hex) {
+        checkColor(hex);
+        return new Color(Integer.parseInt(hex.substring(1), 16));
+    }
+
+    /**
+     * The ink of a marker kind. Each kind has its own near-black shade as well as its own shape, so
+     * the shape carries the meaning on paper and the shade lets a reader of the SVG find the marker.
+     */
+    public static String markerInk(MarkerKind kind) {
+        return switch (kind) {
+            case GAIN_CROSSOVER -> "#101828";
+            case PHASE_CROSSOVER -> "#3a1010";
+            case PEAK -> "#10301a";
+            case SETTLING -> "#302a10";
+            case DISAGREEMENT -> "#2a1036";
+        };
+    }
+
+    /** The shape that stands for a marker kind. */
+    public static Glyph glyphFor(MarkerKind kind) {
+        return switch (kind) {
+            case GAIN_CROSSOVER -> Glyph.CIRCLE;
+            case PHASE_CROSSOVER -> Glyph.SQUARE;
+            case PEAK -> Glyph.TRIANGLE_DOWN;
+            case SETTLING, DISAGREEMENT -> Glyph.DIAMOND;
+        };
+    }
+
+    /** The XChart marker drawing a glyph. */
+    static org.knowm.xchart.style.markers.Marker seriesMarker(Glyph g) {
+        return switch (g) {
+            case NONE -> SeriesMarkers.NONE;
+            case CIRCLE -> SeriesMarkers.CIRCLE;
+            case SQUARE -> SeriesMarkers.SQUARE;
+            case TRIANGLE -> SeriesMarkers.TRIANGLE_UP;
+            case TRIANGLE_DOWN -> SeriesMarkers.TRIANGLE_DOWN;
+            case DIAMOND -> SeriesMarkers.DIAMOND;
+            case CROSS -> SeriesMarkers.CROSS;
+            case PLUS -> SeriesMarkers.PLUS;
+        };
     }
 
     static void checkColor(String color) {

@@ -13,6 +13,7 @@ import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.util.Map;
+import java.util.function.Function;
 
 /**
  * A canvas that paints into an RGB image with Java2D, at {@code scale} image pixels per figure
@@ -61,6 +62,19 @@ public final class RasterCanvas implements Canvas {
     @Override
     public void endGroup() {
         // See beginGroup.
+    }
+
+    @Override
+    public void java2d(String cssClass, double x, double y, double width, double height,
+                       Function<Graphics2D, Map<String, String>> painter) {
+        Graphics2D box = (Graphics2D) g.create();
+        try {
+            box.translate(x, y);
+            box.clip(new Rectangle2D.Double(0, 0, width, height));
+            painter.apply(box);
+        } finally {
+            box.dispose();
+        }
     }
 
     @Override

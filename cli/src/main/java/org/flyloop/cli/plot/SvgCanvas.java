@@ -1,6 +1,8 @@
 package org.flyloop.cli.plot;
 
+import java.awt.Graphics2D;
 import java.util.Map;
+import java.util.function.Function;
 
 /**
  * A canvas that writes SVG 1.1 text meant to stand alone as a file and to sit inline in an XHTML
@@ -60,6 +62,15 @@ public final class SvgCanvas implements Canvas {
         }
         depth--;
         body.append("</g>\n");
+    }
+
+    @Override
+    public void java2d(String cssClass, double x, double y, double width, double height,
+                       Function<Graphics2D, Map<String, String>> painter) {
+        Java2dSvg.Result r = Java2dSvg.record(x, y, width, height, painter);
+        beginGroup(cssClass, r.data());
+        body.append(r.body());
+        endGroup();
     }
 
     @Override

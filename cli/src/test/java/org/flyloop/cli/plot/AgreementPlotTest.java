@@ -53,14 +53,21 @@ class AgreementPlotTest {
         double limit = 5e3;
         SvgProbe svg = new SvgProbe(PlotFiles.svg(AgreementPlot.figure(data(limit))));
         Element panel = svg.panel("difference-magnitude");
-        Element worst = svg.groups(panel, "disagreement").get(0);
-        double f = SvgProbe.attr(worst, "data-x");
-        // The difference grows with f, so the worst point is the last grid point at or below the limit.
+        List<double[]> worst = SvgProbe.filledShapeCentres(panel, PlotTheme.markerInk(MarkerKind.DISAGREEMENT));
+        assertEquals(1, worst.size());
+        double drawnHz = SvgProbe.xValue(panel, worst.get(0)[0]);
+        // The difference grows with f, so the worst point is the last grid point at or below the
+        // limit; grid points are 1/30 decade apart, several pixels, so the drawn one is identifiable.
         double step = Math.pow(10, 4.0 / 120);
-        assertTrue(f <= limit && f * step > limit, "worst at " + f);
-        assertEquals(10 * Math.log10(1 + Math.pow(f / F0, 2)), SvgProbe.attr(worst, "data-y"), 1e-9);
+        int k = (int) Math.round(Math.log10(drawnHz / 10) / Math.log10(step));
+        double f = 10 * Math.pow(step, k);
+        assertEquals(0, Math.log(drawnHz / f), Math.log(SvgProbe.xPerPixel(panel)), "drawn on a grid point");
+        assertTrue(f <= limit * (1 + 1e-9) && f * step > limit, "worst at " + f);
+        assertEquals(10 * Math.log10(1 + Math.pow(f / F0, 2)), SvgProbe.yValue(panel, worst.get(0)[1]),
+                SvgProbe.yPerPixel(panel));
         assertEquals(4, svg.groups(svg.root(), "panel").size());
-        assertTrue(svg.texts(svg.root()).contains("Δ magnitude (dB)"));
+        assertEquals("Δ magnitude (dB)", panel.getAttribute("data-y-title"));
+        assertTrue(SvgProbe.list(svg.panel("magnitude"), "data-labels").contains("compared up to 5 kHz"));
     }
 
     @Test

@@ -3,18 +3,22 @@ package org.flyloop.cli.plot;
 import java.io.ByteArrayInputStream;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import javax.xml.parsers.DocumentBuilderFactory;
 import org.w3c.dom.Document;
 import org.w3c.dom.Element;
-import org.w3c.dom.Node;
 import org.w3c.dom.NodeList;
 
 /**
- * Reads a figure's SVG back as XML and maps drawn coordinates to values through the axis geometry
- * the renderer writes on every panel group.
+ * Reads a figure's SVG back as XML, finds shapes drawn by XChart by their colour, and maps drawn
+ * coordinates to values through the axis geometry written on every panel group.
  */
 final class SvgProbe {
+
+    private static final Pattern NUMBER = Pattern.compile("-?\\d+(?:\\.\\d+)?(?:[eE]-?\\d+)?");
 
     private final Document doc;
 
@@ -46,7 +50,7 @@ final class SvgProbe {
                 .orElseThrow(() -> new AssertionError("no panel " + name));
     }
 
-    /** Every text content of {@code <text>} elements under scope. */
+    /** Every text content of {@code <text>} elements under scope (text the canvas wrote as text). */
     List<String> texts(Element scope) {
         List<String> out = new ArrayList<>();
         NodeList all = scope.getElementsByTagNameNS("*", "text");
@@ -56,14 +60,80 @@ final class SvgProbe {
         return out;
     }
 
-    /** The first element child named {@code tag} (any shape the marker glyph is drawn with). */
-    static Element first(Element scope, String tag) {
-        NodeList l = scope.getElementsByTagNameNS("*", tag);
-        return l.getLength() == 0 ? null : (Element) l.item(0);
+    /** A "|"-separated data attribute as a list. */
+    static List<String> list(Element e, String name) {
+        return Arrays.asList(e.getAttribute(name).split("\\|"));
     }
 
     static double attr(Element e, String name) {
         return Double.parseDouble(e.getAttribute(name));
+    }
+
+    /** "rgb(r,g,b)" as VectorGraphics2D writes a {@code #rrggbb} colour. */
+    static String rgb(String hex) {
+        int v = Integer.parseInt(hex.substring(1), 16);
+        return "rgb(" + (v >> 16) + "," + ((v >> 8) & 255) + "," + (v & 255) + ")";
+    }
+
+    /**
+     * Centres of the filled shapes of colour {@code hex} under scope: ellipse centre, rectangle
+     * centre, or the middle of a path's bounding box.
+     */
+    static List<double[]> filledShapeCentres(Element scope, String hex) {
+        String fill = "fill:" + rgb(hex) + ";";
+        List<double[]> out = new ArrayList<>();
+        for (String tag : List.of("ellipse", "rect", "path")) {
+            NodeList all = scope.getElementsByTagNameNS("*", tag);
+            for (int i = 0; i < all.getLength(); i++) {
+                Element e = (Element) all.item(i);
+                if (!e.getAttribute("style").contains(fill)) {
+                    continue;
+                }
+                switch (tag) {
+                    case "ellipse" -> out.add(new double[] {attr(e, "cx"), attr(e, "cy")});
+                    case "rect" -> out.add(new double[] {attr(e, "x") + attr(e, "width") / 2,
+                        attr(e, "y") + attr(e, "height") / 2});
+                    default -> {
+                        double[][] b = bounds(e.getAttribute("d"));
+                        out.add(new double[] {(b[0][0] + b[0][1]) / 2, (b[1][0] + b[1][1]) / 2});
+                    }
+                }
+            }
+        }
+        return out;
+    }
+
+    /** x of every vertical {@code <line>} stroked in colour {@code hex} under scope. */
+    static List<Double> verticalLineXs(Element scope, String hex) {
+        String stroke = "stroke:" + rgb(hex) + ";";
+        List<Double> out = new ArrayList<>();
+        NodeList all = scope.getElementsByTagNameNS("*", "line");
+        for (int i = 0; i < all.getLength(); i++) {
+            Element e = (Element) all.item(i);
+            if (e.getAttribute("style").contains(stroke) && Math.abs(attr(e, "x1") - attr(e, "x2")) < 1e-6
+                    && Math.abs(attr(e, "y1") - attr(e, "y2")) > 1) {
+                out.add(attr(e, "x1"));
+            }
+        }
+        return out;
+    }
+
+    /** {{xmin, xmax}, {ymin, ymax}} of the coordinates of an absolute path (M, L, Z only). */
+    private static double[][] bounds(String d) {
+        Matcher m = NUMBER.matcher(d);
+        List<Double> v = new ArrayList<>();
+        while (m.find()) {
+            v.add(Double.parseDouble(m.group()));
+        }
+        double[][] b = {{Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY},
+            {Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY}};
+        for (int i = 0; i + 1 < v.size(); i += 2) {
+            b[0][0] = Math.min(b[0][0], v.get(i));
+            b[0][1] = Math.max(b[0][1], v.get(i));
+            b[1][0] = Math.min(b[1][0], v.get(i + 1));
+            b[1][1] = Math.max(b[1][1], v.get(i + 1));
+        }
+        return b;
     }
 
     /** Maps a pixel x back to the x value through the panel's axis (log or linear). */
@@ -85,53 +155,17 @@ final class SvgProbe {
         return lo + (bottom - py) / (bottom - top) * (hi - lo);
     }
 
-    /**
-     * Centre of a marker's glyph, the last shape drawn in its group (a label box comes before it):
-     * circle centre, rectangle centre, or the middle of a polygon's bounding box.
-     */
-    static double[] glyphCentre(Element marker) {
-        Element last = null;
-        NodeList kids = marker.getChildNodes();
-        for (int i = 0; i < kids.getLength(); i++) {
-            Node n = kids.item(i);
-            if (n instanceof Element e && List.of("circle", "rect", "polygon").contains(e.getLocalName())) {
-                last = e;
-            }
-        }
-        if (last == null) {
-            throw new AssertionError("marker without a glyph");
-        }
-        switch (last.getLocalName()) {
-            case "circle":
-                return new double[] {attr(last, "cx"), attr(last, "cy")};
-            case "rect":
-                return new double[] {attr(last, "x") + attr(last, "width") / 2, attr(last, "y") + attr(last, "height") / 2};
-            default:
-                String[] pts = last.getAttribute("points").trim().split(" ");
-                double[] xs = new double[pts.length];
-                double[] ys = new double[pts.length];
-                for (int i = 0; i < pts.length; i++) {
-                    String[] xy = pts[i].split(",");
-                    xs[i] = Double.parseDouble(xy[0]);
-                    ys[i] = Double.parseDouble(xy[1]);
-                }
-                return new double[] {(min(xs) + max(xs)) / 2, (min(ys) + max(ys)) / 2};
-        }
+    /** How far one pixel moves along the panel's x axis: a ratio on a log axis, a difference otherwise. */
+    static double xPerPixel(Element panel) {
+        double span = attr(panel, "data-right") - attr(panel, "data-left");
+        double lo = attr(panel, "data-x-min");
+        double hi = attr(panel, "data-x-max");
+        return panel.getAttribute("data-x-scale").equals("log") ? Math.pow(hi / lo, 1 / span) : (hi - lo) / span;
     }
 
-    private static double min(double[] v) {
-        double m = v[0];
-        for (double x : v) {
-            m = Math.min(m, x);
-        }
-        return m;
-    }
-
-    private static double max(double[] v) {
-        double m = v[0];
-        for (double x : v) {
-            m = Math.max(m, x);
-        }
-        return m;
+    /** Value of one pixel along the panel's y axis. */
+    static double yPerPixel(Element panel) {
+        return (attr(panel, "data-y-max") - attr(panel, "data-y-min"))
+                / (attr(panel, "data-bottom") - attr(panel, "data-top"));
     }
 }
