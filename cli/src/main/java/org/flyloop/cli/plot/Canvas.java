@@ -35,12 +35,13 @@ public interface Canvas {
 
     /**
      * Lets a Java2D painter (a chart library) draw into the box at ({@code x}, {@code y}) of size
-     * {@code width} × {@code height}, in box-local pixels. The painter returns data attributes that
-     * the SVG back end writes on a group of class {@code cssClass} around the drawing (values that
-     * are only known once the painter has laid itself out, such as plot-area pixels).
+     * {@code width} × {@code height}, in box-local pixels. The painter reports back what the SVG
+     * back end writes around the drawing: data attributes on a group of class {@code cssClass}
+     * (values only known once the painter has laid itself out, such as plot-area pixels), groups
+     * around named shapes, and a description.
      */
     void java2d(String cssClass, double x, double y, double width, double height,
-                Function<Graphics2D, Map<String, String>> painter);
+                Function<Graphics2D, PaintedLayer> painter);
 
     /** Advance width of {@code text} in figure pixels, the same for both back ends. */
     default double textWidth(String text, TextStyle style) {

@@ -39,6 +39,7 @@ final class PanelChart {
     private final AxisUnit yUnit;
     private final XYChart chart;
     private final List<String> labels = new ArrayList<>();
+    private final List<PaintedLayer.ShapeTag> markerTags = new ArrayList<>();
     private int hiddenSeries;
 
     /**
@@ -82,10 +83,11 @@ final class PanelChart {
     }
 
     /**
-     * Paints the chart and returns the panel's geometry as data attributes: the axis ranges, the
-     * pixels XChart maps the range ends to (plot area, box-local), and the texts drawn as outlines.
+     * Paints the chart and reports the panel's geometry as data attributes (the axis ranges, the
+     * pixels XChart maps the range ends to, box-local, and the texts it drew as outlines), its
+     * markers as named shapes, and a description naming the traces and notes.
      */
-    Map<String, String> paint(Graphics2D g) {
+    PaintedLayer paint(Graphics2D g) {
         chart.paint(g, chart.getWidth(), chart.getHeight());
         Map<String, String> data = new LinkedHashMap<>();
         data.put("name", panel.name());
@@ -104,8 +106,11 @@ final class PanelChart {
         data.put("y-title", chart.getYAxisTitle());
         // XChart draws text as outlines; the words stay readable to search and screen readers here.
         data.put("labels", String.join("|", labels));
-        data.put("traces", String.join("|", panel.traces().stream().map(Trace::name).distinct().toList()));
-        return data;
+        List<String> names = panel.traces().stream().map(Trace::name).distinct().toList();
+        data.put("traces", String.join("|", names));
+        String description = chart.getYAxisTitle() + ": " + String.join(", ", names)
+                + (labels.isEmpty() ? "" : "; " + String.join("; ", labels));
+        return new PaintedLayer(data, markerTags, description);
     }
 
     private void style(boolean bottomMost) {
@@ -249,6 +254,12 @@ final class PanelChart {
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
             s.setMarker(PlotTheme.seriesMarker(PlotTheme.glyphFor(m.kind())));
             s.setMarkerColor(PlotTheme.color(PlotTheme.markerInk(m.kind())));
+            Map<String, String> data = new LinkedHashMap<>();
+            data.put("x", Double.toString(m.x()));
+            data.put("y", Double.toString(m.y()));
+            data.put("label", m.label());
+            markerTags.add(new PaintedLayer.ShapeTag(PlotTheme.markerInk(m.kind()), "marker " + m.kind().cssClass(),
+                    data));
             if (m.labelled()) {
                 // Above the point, or below it when the point is near the top of the panel.
                 // Right of the point and a little above it; left of it near the right edge.

@@ -66,7 +66,7 @@ public final class RasterCanvas implements Canvas {
 
     @Override
     public void java2d(String cssClass, double x, double y, double width, double height,
-                       Function<Graphics2D, Map<String, String>> painter) {
+                       Function<Graphics2D, PaintedLayer> painter) {
         Graphics2D box = (Graphics2D) g.create();
         try {
             box.translate(x, y);

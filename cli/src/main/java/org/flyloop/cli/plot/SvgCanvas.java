@@ -66,9 +66,12 @@ public final class SvgCanvas implements Canvas {
 
     @Override
     public void java2d(String cssClass, double x, double y, double width, double height,
-                       Function<Graphics2D, Map<String, String>> painter) {
+                       Function<Graphics2D, PaintedLayer> painter) {
         Java2dSvg.Result r = Java2dSvg.record(x, y, width, height, painter);
-        beginGroup(cssClass, r.data());
+        beginGroup(cssClass, r.layer().data());
+        if (!r.layer().description().isEmpty()) {
+            body.append("<desc>").append(escape(r.layer().description())).append("</desc>\n");
+        }
         body.append(r.body());
         endGroup();
     }

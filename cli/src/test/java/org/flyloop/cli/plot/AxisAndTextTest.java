@@ -8,7 +8,12 @@ import java.util.Map;
 import javax.xml.parsers.DocumentBuilderFactory;
 import java.io.ByteArrayInputStream;
 import java.nio.charset.StandardCharsets;
+import java.awt.Color;
+import java.awt.geom.Ellipse2D;
 import java.awt.geom.Rectangle2D;
+import java.util.List;
+import org.w3c.dom.Document;
+import org.w3c.dom.Element;
 import org.junit.jupiter.api.Test;
 
 /** Number text, axis fitting and the Java2D-to-SVG bridge: the small pieces every figure relies on. */
@@ -54,21 +59,30 @@ class AxisAndTextTest {
     }
 
     @Test
-    void java2dPaintingBecomesANestedSvgWithoutClipReferences() throws Exception {
+    void java2dPaintingBecomesATranslatedGroupWithoutClipReferencesAndWithTaggedShapes() throws Exception {
         Java2dSvg.Result r = Java2dSvg.record(10, 20, 200, 100, g -> {
-            g.clip(new Rectangle2D.Double(5, 5, 50, 50));
+            g.clip(new Rectangle2D.Double(5, 5, 150, 90));
+            g.setColor(new Color(0x336699));
             g.fill(new Rectangle2D.Double(0, 0, 100, 100));
-            return Map.of("k", "v");
+            g.setColor(new Color(0x102030));
+            g.fill(new Ellipse2D.Double(40, 30, 8, 8));
+            return new PaintedLayer(Map.of("k", "v"), List.of(new PaintedLayer.ShapeTag("#102030", "marker dot",
+                    Map.of("label", "a < b"))), "");
         });
-        assertEquals(Map.of("k", "v"), r.data());
-        assertTrue(r.body().startsWith("<svg x=\"10\" y=\"20\" width=\"200\" height=\"100\""), r.body());
-        for (String banned : java.util.List.of("<?xml", "<!DOCTYPE", "clip-path", "<defs", "url(")) {
+        assertEquals(Map.of("k", "v"), r.layer().data());
+        assertTrue(r.body().startsWith("<g transform=\"translate(10 20)\">"), r.body());
+        for (String banned : List.of("<?xml", "<!DOCTYPE", "clip-path", "<defs", "url(", " id=")) {
             assertFalse(r.body().contains(banned), banned);
         }
         String doc = "<svg xmlns=\"http://www.w3.org/2000/svg\">" + r.body() + "</svg>";
         DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
         f.setNamespaceAware(true);
-        assertEquals(1, f.newDocumentBuilder().parse(new ByteArrayInputStream(doc.getBytes(StandardCharsets.UTF_8)))
-                .getElementsByTagNameNS("http://www.w3.org/2000/svg", "rect").getLength());
+        Document d = f.newDocumentBuilder().parse(new ByteArrayInputStream(doc.getBytes(StandardCharsets.UTF_8)));
+        Element dot = (Element) d.getElementsByTagNameNS("*", "circle").item(0);
+        assertEquals(44, Double.parseDouble(dot.getAttribute("cx")), 1e-9);
+        assertEquals(34, Double.parseDouble(dot.getAttribute("cy")), 1e-9);
+        Element group = (Element) dot.getParentNode();
+        assertEquals("marker dot", group.getAttribute("class"));
+        assertEquals("a < b", group.getAttribute("data-label"));
     }
 }

@@ -43,6 +43,10 @@ class BodePlotTest {
         double pm = 90 - Math.toDegrees(Math.atan(fc / BodePlotTestData.FP1) + Math.atan(fc / BodePlotTestData.FP2));
         String label = "fc = " + SiText.format(fc, "Hz", 3) + ", PM = " + SiText.fixed(pm, 1) + "°";
         assertTrue(SvgProbe.list(panel, "data-labels").contains(label), () -> panel.getAttribute("data-labels"));
+        // The drawn shape is marked up with what it stands for.
+        Element group = svg.groups(panel, "gain-crossover").get(0);
+        assertEquals(label, group.getAttribute("data-label"));
+        assertEquals(fc, SvgProbe.attr(group, "data-x"), 1e-4 * fc);
     }
 
     @Test

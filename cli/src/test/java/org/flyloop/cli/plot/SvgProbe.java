@@ -76,13 +76,13 @@ final class SvgProbe {
     }
 
     /**
-     * Centres of the filled shapes of colour {@code hex} under scope: ellipse centre, rectangle
+     * Centres of the filled shapes of colour {@code hex} under scope: circle or ellipse centre, rectangle
      * centre, or the middle of a path's bounding box.
      */
     static List<double[]> filledShapeCentres(Element scope, String hex) {
         String fill = "fill:" + rgb(hex) + ";";
         List<double[]> out = new ArrayList<>();
-        for (String tag : List.of("ellipse", "rect", "path")) {
+        for (String tag : List.of("circle", "ellipse", "rect", "path")) {
             NodeList all = scope.getElementsByTagNameNS("*", tag);
             for (int i = 0; i < all.getLength(); i++) {
                 Element e = (Element) all.item(i);
@@ -90,7 +90,7 @@ final class SvgProbe {
                     continue;
                 }
                 switch (tag) {
-                    case "ellipse" -> out.add(new double[] {attr(e, "cx"), attr(e, "cy")});
+                    case "circle", "ellipse" -> out.add(new double[] {attr(e, "cx"), attr(e, "cy")});
                     case "rect" -> out.add(new double[] {attr(e, "x") + attr(e, "width") / 2,
                         attr(e, "y") + attr(e, "height") / 2});
                     default -> {
