@@ -1,6 +1,6 @@
 package org.flyloop.cli.plot;
 
-/** Anything that paints itself on a {@link Canvas} of known size: a figure, a schematic. */
+/** Anything that paints itself on a {@link Canvas} of known size: a figure (through XChart), a schematic. */
 public interface Drawing {
 
     /** Accessible title. */

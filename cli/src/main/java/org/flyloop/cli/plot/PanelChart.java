@@ -76,6 +76,26 @@ final class PanelChart {
             }
         }
         addMarkers();
+        if (bottomMost) {
+            addLegendOnlyEntries(looks);
+        }
+    }
+
+    /**
+     * The legend sits under the bottom panel but names every trace of the figure; a trace drawn
+     * only in upper panels gets a one-point series with no finite value, which XChart lists in the
+     * legend and draws nowhere.
+     */
+    private void addLegendOnlyEntries(Map<String, PlotTheme.TraceLook> looks) {
+        List<String> here = panel.traces().stream().map(Trace::name).toList();
+        for (Map.Entry<String, PlotTheme.TraceLook> e : looks.entrySet()) {
+            if (!here.contains(e.getKey())) {
+                XYSeries s = chart.addSeries(e.getKey(), new double[] {x.min()}, new double[] {Double.NaN});
+                s.setLineStyle(stroke(e.getValue().line()));
+                s.setLineColor(PlotTheme.color(e.getValue().line().color()));
+                s.setMarker(SeriesMarkers.NONE);
+            }
+        }
     }
 
     XYChart chart() {
@@ -308,7 +328,9 @@ final class PanelChart {
     static BasicStroke stroke(LineStyle look) {
         double[] d = look.dash();
         if (d.length == 0) {
-            return new BasicStroke((float) look.width(), BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND);
+            // Round caps: XChart strokes a line segment by segment, and butt ends leave the
+            // joints of a dense, thick trace looking grey.
+            return new BasicStroke((float) look.width(), BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
         }
         float[] f = new float[d.length];
         for (int i = 0; i < d.length; i++) {

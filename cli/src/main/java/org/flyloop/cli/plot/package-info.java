@@ -4,12 +4,16 @@
  *
  * <p>Inputs are plain data ({@link org.flyloop.cli.plot.Trace}, {@link org.flyloop.cli.plot.Marker},
  * {@link org.flyloop.cli.plot.ReferenceLine}, {@link org.flyloop.cli.plot.Band}) so a figure can be
- * built without running a design. The drawing goes through one {@link org.flyloop.cli.plot.Canvas}
- * with two back ends, so the SVG and the PNG of a figure are the same picture. The SVG carries its
- * geometry as data attributes (axis ranges and plot-area pixels on every panel, the value of every
- * marker), which lets a reader map any drawn point back to the quantity it stands for.
+ * built without running a design. Every panel is drawn by XChart ({@link org.flyloop.cli.plot.PanelChart},
+ * an {@code XYChart} with our own styling, never the library theme) and painted through one
+ * {@link org.flyloop.cli.plot.Canvas} with two back ends: Java2D into an image for the PNG, and
+ * VectorGraphics2D recorded into SVG for the vector picture, so both are the same picture. The SVG
+ * carries its geometry as data attributes (axis ranges and plot-area pixels on every panel, the
+ * value and label of every marker), which lets a reader map any drawn point back to the quantity it
+ * stands for; the same canvas also draws hand-laid pictures such as the compensator schematic.
  *
- * <p>The look is our own and meant for paper: black and greys with a few muted colours, every
- * trace also told apart by its dash pattern and glyphs, so a greyscale print stays readable.
+ * <p>The look is our own and meant for paper: white ground, black and greys with a few muted
+ * colours, the trace that matters thick and solid, every other trace thin, dashed and carrying its
+ * own glyphs, so a greyscale print stays readable.
  */
 package org.flyloop.cli.plot;
