@@ -9,8 +9,8 @@ import org.flyloop.loop.LoadStepResponse;
 
 /**
  * The load-step figure a design report shows: the linear closed-loop response of the output to a
- * load step of half the largest load current ({@link ClosedLoop#loadStep}), at the corner with
- * the smallest phase margin, where the response rings most. Half the full load is a middle value
+ * load step of half the largest load current up to full load ({@link ClosedLoop#loadStep}), at
+ * the full-load corner with the smallest phase margin, where the response rings most. Half the full load is a middle value
  * of the 25 % to 100 % steps in use (common practice, no source).
  *
  * @param corner         the corner the step is simulated at
@@ -33,7 +33,7 @@ public record DesignLoadStep(CornerResult corner, double stepA, double peakDevia
      * grow).
      */
     public static Optional<DesignLoadStep> atWorstPhaseMargin(DesignResult result) {
-        CornerResult worst = result.roundedLoop().worstPhaseMargin();
+        CornerResult worst = result.roundedLoop().loadStepCorner();
         if (!worst.margins().isStable()) {
             return Optional.empty();
         }

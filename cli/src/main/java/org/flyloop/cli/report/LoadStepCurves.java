@@ -31,18 +31,21 @@ public final class LoadStepCurves {
     private LoadStepCurves() {
     }
 
-    /** The linear response to a load step of {@code stepA} at the worst corner. */
+    /**
+     * The linear response to a load step of {@code stepA} up to full load, at the full-load corner
+     * with the smallest phase margin ({@link org.flyloop.design.LoopEvaluation#loadStepCorner}).
+     */
     public static LoadStepResponse linearResponse(DesignResult r, double stepA) {
-        CornerResult c = DesignCurves.worst(r);
+        CornerResult c = r.roundedLoop().loadStepCorner();
         return ClosedLoop.loadStep(c.corner().stage().outputImpedance(), c.loop(), stepA, r.request().stage().vout());
     }
 
     /** The load-step figure data with the linear series, its peak, band and settling time. */
     public static StepData loadStep(DesignResult r, double stepA) {
         LoadStepResponse s = linearResponse(r, stepA);
-        CornerResult c = DesignCurves.worst(r);
-        String subtitle = "step of " + signed(stepA, "A") + " at " + CornerNames.corner(c.corner())
-                + " (worst phase margin)";
+        CornerResult c = r.roundedLoop().loadStepCorner();
+        String subtitle = "step of " + signed(stepA, "A") + " up to " + CornerNames.corner(c.corner())
+                + " (full load, worst phase margin there)";
         StepData d = StepData.of("Load step: output deviation", subtitle, "output deviation", "V",
                 java.util.List.of(new Trace(LINEAR_NAME, s.timesS(), s.deviationV(), Emphasis.STRONG)));
         d = d.withMarker(new Marker(s.peakTimeS(), s.peakDeviationV(), MarkerKind.PEAK,
