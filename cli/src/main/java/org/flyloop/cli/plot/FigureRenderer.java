@@ -23,9 +23,8 @@ public final class FigureRenderer implements Drawing {
     private static final double PANEL_HEIGHT = 230;
     /** Below every plot area: x tick labels. */
     private static final double TICK_ROOM = 30;
-    /** Below the bottom plot area: x title and legend padding. */
-    private static final double TITLE_ROOM = 40;
-    private static final double LEGEND_ROW = 19;
+    /** Below the bottom plot area: the x title. */
+    private static final double TITLE_ROOM = 30;
 
     private final Figure figure;
     private final List<PanelChart> charts = new ArrayList<>();
@@ -45,14 +44,16 @@ public final class FigureRenderer implements Drawing {
         for (int i = 0; i <= last; i++) {
             Panel p = figure.panels().get(i);
             double plot = PANEL_HEIGHT * p.heightWeight();
-            double h = plot + TICK_ROOM + (i == last ? TITLE_ROOM + LEGEND_ROW * looks.size() : 0);
+            double h = plot + TICK_ROOM + (i == last ? TITLE_ROOM : 0);
             double[] yData = yDataRange(p, x);
             AxisRange y = AxisRange.fit(p.scale(), yData[0], yData[1], Math.max(2, (int) Math.floor(plot / 34)),
                     true);
+            LegendBlock legend = i == last ? new LegendBlock(looks, WIDTH) : null;
             charts.add(new PanelChart(figure, p, x, y, xUnit, looks, (int) WIDTH, (int) Math.round(h), i == last,
-                    i == 0));
-            boxes.add(new double[] {top, Math.round(h)});
-            top += Math.round(h);
+                    i == 0, legend));
+            double box = Math.round(h + (legend == null ? 0 : legend.height()));
+            boxes.add(new double[] {top, box});
+            top += box;
         }
         height = top + 4;
     }

@@ -3,17 +3,17 @@ package org.flyloop.cli.plot;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.awt.FontMetrics;
 import java.awt.Graphics2D;
+import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.knowm.xchart.AnnotationText;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
-import org.knowm.xchart.style.Styler;
 import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
@@ -31,6 +31,10 @@ final class PanelChart {
     private static final int GLYPHS_PER_TRACE = 9;
     /** Decade tick labels on a logarithmic axis: "100", "1,000", "10,000". */
     static final String DECADE_PATTERN = "#,##0";
+    /** Half the side of the square kept clear around a marker glyph, px. */
+    private static final double MARKER_CLEARANCE = 7;
+    private static final double BOX_PAD_X = 4;
+    private static final double BOX_PAD_Y = 2;
 
     private final Panel panel;
     private final AxisRange x;
@@ -40,6 +44,10 @@ final class PanelChart {
     private final XYChart chart;
     private final List<String> labels = new ArrayList<>();
     private final List<PaintedLayer.ShapeTag> markerTags = new ArrayList<>();
+    private final List<PendingLabel> pending = new ArrayList<>();
+    /** Every drawn line in data units, so labels can keep clear of them. */
+    private final List<double[][]> drawnLines = new ArrayList<>();
+    private final LegendBlock legend;
     private int hiddenSeries;
 
     /**
@@ -53,10 +61,13 @@ final class PanelChart {
      * @param height     chart height, px
      * @param bottomMost true for the panel that carries the x title and the legend
      * @param topMost    true for the panel that carries the labels of vertical lines
+     * @param legend     the legend drawn under this panel's chart, or null
      */
     PanelChart(Figure figure, Panel panel, AxisRange x, AxisRange y, AxisUnit xUnit,
-               Map<String, PlotTheme.TraceLook> looks, int width, int height, boolean bottomMost, boolean topMost) {
+               Map<String, PlotTheme.TraceLook> looks, int width, int height, boolean bottomMost, boolean topMost,
+               LegendBlock legend) {
         this.panel = panel;
+        this.legend = legend;
         this.x = x;
         this.y = y;
         this.xUnit = xUnit;
@@ -76,26 +87,6 @@ final class PanelChart {
             }
         }
         addMarkers();
-        if (bottomMost) {
-            addLegendOnlyEntries(looks);
-        }
-    }
-
-    /**
-     * The legend sits under the bottom panel but names every trace of the figure; a trace drawn
-     * only in upper panels gets a one-point series with no finite value, which XChart lists in the
-     * legend and draws nowhere.
-     */
-    private void addLegendOnlyEntries(Map<String, PlotTheme.TraceLook> looks) {
-        List<String> here = panel.traces().stream().map(Trace::name).toList();
-        for (Map.Entry<String, PlotTheme.TraceLook> e : looks.entrySet()) {
-            if (!here.contains(e.getKey())) {
-                XYSeries s = chart.addSeries(e.getKey(), new double[] {x.min()}, new double[] {Double.NaN});
-                s.setLineStyle(stroke(e.getValue().line()));
-                s.setLineColor(PlotTheme.color(e.getValue().line().color()));
-                s.setMarker(SeriesMarkers.NONE);
-            }
-        }
     }
 
     XYChart chart() {
@@ -109,6 +100,10 @@ final class PanelChart {
      */
     PaintedLayer paint(Graphics2D g) {
         chart.paint(g, chart.getWidth(), chart.getHeight());
+        paintLabels(g);
+        if (legend != null) {
+            legend.paint(g, chart.getHeight());
+        }
         Map<String, String> data = new LinkedHashMap<>();
         data.put("name", panel.name());
         data.put("x-scale", x.scale() == Scale.LOG ? "log" : "linear");
@@ -156,15 +151,8 @@ final class PanelChart {
         s.setAxisTitlePadding(6);
         s.setXAxisTitleVisible(bottomMost);
         s.setYAxisLeftWidthHint(Y_AXIS_WIDTH);
-        s.setLegendVisible(bottomMost);
-        s.setLegendPosition(Styler.LegendPosition.OutsideS);
-        s.setLegendLayout(Styler.LegendLayout.Vertical);
-        s.setLegendBackgroundColor(paper);
-        s.setLegendBorderColor(paper);
-        s.setLegendFont(font(PlotTheme.LEGEND_SIZE, Font.PLAIN));
-        s.setLegendSeriesLineLength(38);
-        s.setAnnotationTextFont(font(PlotTheme.ANNOTATION_SIZE, Font.PLAIN));
-        s.setAnnotationTextFontColor(ink);
+        // The legend is drawn by LegendBlock in columns; XChart's own would be one long list.
+        s.setLegendVisible(false);
         s.setMarkerSize(9);
         s.setToolTipsEnabled(false);
         s.setCursorEnabled(false);
@@ -198,6 +186,7 @@ final class PanelChart {
             }
         }
         XYSeries s = chart.addSeries(t.name(), xs, ys);
+        drawnLines.add(new double[][] {xs, ys});
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
         s.setLineStyle(stroke(look.line()));
         s.setLineColor(PlotTheme.color(look.line().color()));
@@ -234,8 +223,7 @@ final class PanelChart {
             if (y.contains(g.value())) {
                 line(new double[] {x.min(), x.max()}, new double[] {g.value(), g.value()}, lineFor(g.kind()));
                 if (!g.label().isEmpty()) {
-                    annotate(g.label(), x.scale() == Scale.LOG ? x.min() * 1.6 : x.min() + 0.06 * (x.max() - x.min()),
-                            g.value() + 0.04 * (y.max() - y.min()));
+                    annotate(g.label(), LabelKind.GUIDE, x.min(), g.value());
                 }
             }
         }
@@ -243,9 +231,7 @@ final class PanelChart {
             if (x.contains(v.value())) {
                 line(new double[] {v.value(), v.value()}, new double[] {y.min(), y.max()}, lineFor(v.kind()));
                 if (labelled && !v.label().isEmpty()) {
-                    // Left of the line, so the line does not strike through the text.
-                    annotate(v.label(), shiftX(v.value(), -(halfWidthPx(v.label()) + 5)),
-                            y.max() - 0.07 * (y.max() - y.min()));
+                    annotate(v.label(), LabelKind.VERTICAL, v.value(), y.max());
                 }
             }
         }
@@ -253,14 +239,25 @@ final class PanelChart {
 
     private void addBands() {
         for (Band b : panel.bands()) {
+            double low = Math.max(b.low(), y.min());
+            double high = Math.min(b.high(), y.max());
+            if (low < high) {
+                // A closed polygon over the band, added before the traces so they draw over it.
+                XYSeries fill = hidden(new double[] {x.min(), x.max(), x.max(), x.min()},
+                        new double[] {low, low, high, high});
+                fill.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.PolygonArea);
+                fill.setFillColor(PlotTheme.color(PlotTheme.BAND_FILL));
+                fill.setLineColor(PlotTheme.color(PlotTheme.BAND_FILL));
+                fill.setLineStyle(new BasicStroke(0f));
+                fill.setMarker(SeriesMarkers.NONE);
+            }
             for (double v : new double[] {b.low(), b.high()}) {
                 if (y.contains(v)) {
                     line(new double[] {x.min(), x.max()}, new double[] {v, v}, PlotTheme.BAND_EDGE);
                 }
             }
             if (!b.label().isEmpty() && y.contains(b.high())) {
-                double at = x.scale() == Scale.LOG ? x.max() / 3 : x.max() - 0.1 * (x.max() - x.min());
-                annotate(b.label(), at, b.high() + 0.05 * (y.max() - y.min()));
+                annotate(b.label(), LabelKind.BAND, x.max(), b.high());
             }
         }
     }
@@ -280,19 +277,15 @@ final class PanelChart {
             data.put("label", m.label());
             markerTags.add(new PaintedLayer.ShapeTag(PlotTheme.markerInk(m.kind()), "marker " + m.kind().cssClass(),
                     data));
+            pending.add(new PendingLabel(m.label(), LabelKind.MARKER, m.x(), m.y()));
             if (m.labelled()) {
-                // Above the point, or below it when the point is near the top of the panel.
-                // Right of the point and a little above it; left of it near the right edge.
-                double reach = 2 * halfWidthPx(m.label()) + 12;
-                double dx = shiftX(m.x(), reach) > x.max() ? -(halfWidthPx(m.label()) + 9) : halfWidthPx(m.label()) + 9;
-                double span = y.max() - y.min();
-                double dy = m.y() + 0.1 * span > y.max() ? -0.06 * span : 0.06 * span;
-                annotate(m.label(), shiftX(m.x(), dx), m.y() + dy);
+                labels.add(m.label());
             }
         }
     }
 
     private void line(double[] xs, double[] ys, LineStyle look) {
+        drawnLines.add(new double[][] {xs, ys});
         XYSeries s = hidden(xs, ys);
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
         s.setLineStyle(stroke(look));
@@ -307,22 +300,115 @@ final class PanelChart {
         return s;
     }
 
-    /** Half the width of a label, px, from the font's average advance (close enough to place it). */
-    private static double halfWidthPx(String text) {
-        return 0.5 * 0.56 * PlotTheme.ANNOTATION_SIZE * text.length();
-    }
-
-    /** {@code value} moved by about {@code px} pixels along the x axis (the plot area is estimated). */
-    private double shiftX(double value, double px) {
-        double plotPx = chart.getWidth() - Y_AXIS_WIDTH - 12.0;
-        double fraction = px / plotPx;
-        return x.scale() == Scale.LOG ? value * Math.pow(x.max() / x.min(), fraction)
-                : value + fraction * (x.max() - x.min());
-    }
-
-    private void annotate(String text, double atX, double atY) {
-        chart.addAnnotation(new AnnotationText(text, atX, atY, false));
+    private void annotate(String text, LabelKind kind, double atX, double atY) {
+        pending.add(new PendingLabel(text, kind, atX, atY));
         labels.add(text);
+    }
+
+    /**
+     * Draws the labels in white, thin-bordered boxes where {@link LabelPlacer} finds room: marker
+     * labels first (closest to their points), then those of vertical lines, bands and guides. Every
+     * marker glyph is kept uncovered and boxes avoid the drawn lines where they can.
+     */
+    private void paintLabels(Graphics2D g) {
+        double left = chart.getScreenXFromChart(x.min());
+        double right = chart.getScreenXFromChart(x.max());
+        double top = chart.getScreenYFromChart(y.max());
+        double bottom = chart.getScreenYFromChart(y.min());
+        LabelPlacer placer = new LabelPlacer(left, top, right, bottom);
+        for (double[][] l : drawnLines) {
+            double[] px = new double[l[0].length];
+            double[] py = new double[px.length];
+            for (int i = 0; i < px.length; i++) {
+                px[i] = Double.isFinite(l[1][i]) ? chart.getScreenXFromChart(l[0][i]) : Double.NaN;
+                py[i] = Double.isFinite(l[1][i]) ? chart.getScreenYFromChart(l[1][i]) : Double.NaN;
+            }
+            placer.ink(px, py);
+        }
+        for (PendingLabel p : pending) {
+            if (p.kind() == LabelKind.MARKER) {
+                double half = MARKER_CLEARANCE;
+                placer.reserve(chart.getScreenXFromChart(p.x()) - half, chart.getScreenYFromChart(p.y()) - half,
+                        2 * half, 2 * half);
+            }
+        }
+        TextStyle style = TextStyle.plain(PlotTheme.ANNOTATION_SIZE, PlotTheme.INK);
+        Graphics2D g2 = (Graphics2D) g.create();
+        g2.setFont(TextMeasure.font(style));
+        FontMetrics fm = g2.getFontMetrics();
+        for (LabelKind kind : LabelKind.values()) {
+            for (PendingLabel p : pending) {
+                if (p.kind() != kind || p.text().isEmpty()) {
+                    continue;
+                }
+                double w = TextMeasure.width(p.text(), style) + 2 * BOX_PAD_X;
+                double h = fm.getAscent() + fm.getDescent() + 2 * BOX_PAD_Y;
+                double ax = chart.getScreenXFromChart(p.x());
+                double ay = chart.getScreenYFromChart(p.y());
+                double[] at = placer.place(spots(kind, ax, ay, w, h, left, top, right, bottom), w, h);
+                Rectangle2D box = new Rectangle2D.Double(at[0], at[1], w, h);
+                g2.setColor(PlotTheme.color(PlotTheme.PAPER));
+                g2.fill(box);
+                g2.setColor(PlotTheme.color(PlotTheme.LABEL_BORDER));
+                g2.setStroke(new BasicStroke(0.8f));
+                g2.draw(box);
+                g2.setColor(PlotTheme.color(PlotTheme.INK));
+                g2.drawString(p.text(), (float) (at[0] + BOX_PAD_X), (float) (at[1] + BOX_PAD_Y + fm.getAscent()));
+            }
+        }
+        g2.dispose();
+    }
+
+    /** Candidate top-left corners for a w × h label box, most preferred first, in pixels. */
+    private static List<double[]> spots(LabelKind kind, double ax, double ay, double w, double h, double left,
+                                        double top, double right, double bottom) {
+        List<double[]> out = new ArrayList<>();
+        double gap = MARKER_CLEARANCE + 3;
+        switch (kind) {
+            case MARKER -> {
+                // The four diagonals, then beside the point, then the same further out.
+                for (int ring = 0; ring < 14; ring++) {
+                    double d = ring * (h + 3);
+                    out.add(new double[] {ax + gap, ay - gap - h - d});
+                    out.add(new double[] {ax - gap - w, ay - gap - h - d});
+                    out.add(new double[] {ax + gap, ay + gap + d});
+                    out.add(new double[] {ax - gap - w, ay + gap + d});
+                    out.add(new double[] {ax + gap + d, ay - h / 2});
+                    out.add(new double[] {ax - gap - w - d, ay - h / 2});
+                }
+            }
+            case VERTICAL -> {
+                // Beside the line near the top (left first, so the line does not strike the
+                // text), stepping down when a neighbour's label is already there.
+                for (double yy = top + 4; yy + h < bottom; yy += h + 3) {
+                    out.add(new double[] {ax - 5 - w, yy});
+                    out.add(new double[] {ax + 5, yy});
+                }
+            }
+            case BAND -> {
+                // Just above the band's upper edge at the right, then inside the band, then leftwards.
+                for (int k = 0; k < 12; k++) {
+                    double xx = right - 6 - w - k * 0.25 * w;
+                    out.add(new double[] {xx, ay - 3 - h});
+                    out.add(new double[] {xx, ay + 3});
+                }
+            }
+            case GUIDE -> {
+                for (int k = 0; k < 12; k++) {
+                    double xx = left + 8 + k * 0.25 * w;
+                    out.add(new double[] {xx, ay - 3 - h});
+                    out.add(new double[] {xx, ay + 3});
+                }
+            }
+        }
+        return out;
+    }
+
+    /** What a label names, in the order labels are placed. */
+    private enum LabelKind { MARKER, VERTICAL, BAND, GUIDE }
+
+    /** A label waiting for the chart's geometry; its anchor in data units. */
+    private record PendingLabel(String text, LabelKind kind, double x, double y) {
     }
 
     static BasicStroke stroke(LineStyle look) {
