@@ -51,6 +51,11 @@ final class LegendBlock {
         columns = Math.max(1, Math.min(Math.max(1, entries.size()), fit));
     }
 
+    /** The trace names in the order the legend lists them. */
+    List<String> names() {
+        return entries.stream().map(Map.Entry::getKey).toList();
+    }
+
     /** Rows of entries. */
     int rows() {
         return (entries.size() + columns - 1) / columns;
