@@ -12,6 +12,12 @@
  * value and label of every marker), which lets a reader map any drawn point back to the quantity it
  * stands for; the same canvas also draws hand-laid pictures such as the compensator schematic.
  *
+ * <p>Annotation labels are not XChart annotations: once XChart has laid out a panel,
+ * {@link org.flyloop.cli.plot.LabelPlacer} puts each label in a white, thin-bordered box inside the
+ * plot area, clear of the other labels and of the marker glyphs, where it crosses the fewest drawn
+ * lines. The legend ({@link org.flyloop.cli.plot.LegendBlock}) is laid out in columns under the
+ * bottom panel, the emphasised trace first.
+ *
  * <p>The look is our own and meant for paper: white ground, black and greys with a few muted
  * colours, the trace that matters thick and solid, every other trace thin, dashed and carrying its
  * own glyphs, so a greyscale print stays readable.
