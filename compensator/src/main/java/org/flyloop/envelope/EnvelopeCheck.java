@@ -1,0 +1,83 @@
+package org.flyloop.envelope;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.IntConsumer;
+import org.flyloop.design.Corner;
+import org.flyloop.design.DesignRequest;
+import org.flyloop.design.LoopEvaluation;
+import org.flyloop.network.CompensatorNetwork;
+import org.flyloop.spec.TolerancesSpec;
+
+/**
+ * A given compensator checked over the operating envelope: the full margin analysis (with the
+ * Nyquist verdict) at every envelope corner with nominal parts, the tolerance worst case when any
+ * toleranced quantity moves the loop, and optionally a Monte Carlo run.
+ *
+ * @param request    the spec's stage, controller, feedback, targets and series
+ * @param network    the compensator checked
+ * @param envelope   the envelope corners
+ * @param corners    the same corners resolved with the nominal stage
+ * @param nominal    the loop at every corner with nominal parts
+ * @param worstCase  the tolerance worst case; null when nothing is toleranced
+ * @param monteCarlo the Monte Carlo run; null when none was asked for
+ */
+public record EnvelopeCheck(DesignRequest request, CompensatorNetwork network, List<EnvelopeCorner> envelope,
+                            List<Corner> corners, LoopEvaluation nominal, WorstCase worstCase,
+                            MonteCarloResult monteCarlo) {
+
+    public EnvelopeCheck {
+        envelope = List.copyOf(envelope);
+        corners = List.copyOf(corners);
+    }
+
+    /**
+     * Checks {@code network} at every corner, and under {@code tolerances} when any toleranced
+     * quantity moves the loop.
+     *
+     * @throws org.flyloop.stage.InfeasibleOperatingPointException when the nominal stage cannot run
+     *         at a corner
+     */
+    public static EnvelopeCheck run(DesignRequest request, CompensatorNetwork network, TolerancesSpec tolerances) {
+        EnvelopeSetup setup = EnvelopeSetup.forWorstCase(request, network, tolerances, EnvelopeSetup.DEFAULT_POINTS);
+        List<Corner> corners = EnvelopeCorners.resolveAll(setup.corners(), request.stage(), request.control());
+        LoopEvaluation nominal = LoopEvaluation.of(network, corners, request.control().fbGain(),
+                request.stage().fswHz(), request.targets());
+        WorstCase worst = setup.box().size() > 0 ? WorstCaseAnalysis.run(setup) : null;
+        return new EnvelopeCheck(request, network, setup.corners(), corners, nominal, worst, null);
+    }
+
+    /**
+     * This check with a Monte Carlo run added.
+     *
+     * @throws IllegalArgumentException when nothing is toleranced (every sample would be the same)
+     */
+    public EnvelopeCheck withMonteCarlo(TolerancesSpec tolerances, int samples, long seed, int threads,
+                                        IntConsumer progress) {
+        EnvelopeSetup setup = EnvelopeSetup.forMonteCarlo(request, network, tolerances, EnvelopeSetup.DEFAULT_POINTS);
+        if (setup.box().size() == 0) {
+            throw new IllegalArgumentException("nothing to sample: no toleranced quantity moves the loop");
+        }
+        MonteCarloResult mc = MonteCarloAnalysis.run(setup, samples, seed, threads, progress);
+        return new EnvelopeCheck(request, network, envelope, corners, nominal, worstCase, mc);
+    }
+
+    /** True when every corner meets every target with nominal parts and in the worst case. */
+    public boolean meetsTargets() {
+        return misses().isEmpty();
+    }
+
+    /** Every missed target, one line each, naming the corner. */
+    public List<String> misses() {
+        List<String> out = new ArrayList<>();
+        for (int c = 0; c < envelope.size(); c++) {
+            for (String miss : nominal.results().get(c).misses()) {
+                out.add("at " + envelope.get(c).label() + ": " + miss);
+            }
+        }
+        if (worstCase != null) {
+            out.addAll(worstCase.misses(request.targets()));
+        }
+        return out;
+    }
+}
