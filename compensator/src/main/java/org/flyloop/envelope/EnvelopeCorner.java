@@ -1,6 +1,7 @@
 package org.flyloop.envelope;
 
-import java.util.Locale;
+import java.math.BigDecimal;
+import java.math.MathContext;
 
 /**
  * One corner of the operating envelope, independent of component tolerances: an input voltage, a
@@ -17,10 +18,18 @@ public record EnvelopeCorner(double vinV, LoadSetting load, double ctr, double n
     /** "vin=36 V, iout=3 A", "vin=36 V, iout=1.02×boundary (2.31 A)", plus ", ctr=0.5" where one applies. */
     public String label() {
         String iout = load instanceof LoadSetting.Boundary
-                ? String.format(Locale.ROOT, "%s (%.4g A)", load.describe(), nominalIoutA)
+                ? load.describe() + " (" + significant(nominalIoutA) + " A)"
                 : load.describe();
-        String s = String.format(Locale.ROOT, "vin=%.4g V, iout=%s", vinV, iout);
-        return Double.isNaN(ctr) ? s : s + String.format(Locale.ROOT, ", ctr=%.3g", ctr);
+        String s = "vin=" + significant(vinV) + " V, iout=" + iout;
+        return Double.isNaN(ctr) ? s : s + ", ctr=" + significant(ctr);
+    }
+
+    /** Four significant digits without trailing zeros or exponent: 36, 0.5, 2.312. */
+    static String significant(double x) {
+        if (!Double.isFinite(x)) {
+            return Double.toString(x);
+        }
+        return new BigDecimal(x).round(new MathContext(4)).stripTrailingZeros().toPlainString();
     }
 
     /** True for a corner placed beside the CCM/DCM boundary. */

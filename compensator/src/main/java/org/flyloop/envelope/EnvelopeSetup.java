@@ -92,6 +92,11 @@ public final class EnvelopeSetup {
         return new EnvelopeSetup(request, other, tolerances, corners, box, grid);
     }
 
+    /** This setup with box quantity {@code j} alone toleranced. */
+    EnvelopeSetup keepOnly(int j) {
+        return new EnvelopeSetup(request, network, tolerances, corners, box.keepOnly(j), grid);
+    }
+
     public DesignRequest request() {
         return request;
     }

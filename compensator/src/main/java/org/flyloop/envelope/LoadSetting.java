@@ -1,6 +1,5 @@
 package org.flyloop.envelope;
 
-import java.util.Locale;
 import org.flyloop.spec.ValueRange;
 import org.flyloop.stage.OperatingPointSolver;
 
@@ -29,7 +28,7 @@ public sealed interface LoadSetting {
 
         @Override
         public String describe() {
-            return String.format(Locale.ROOT, "%.4g A", ioutA);
+            return EnvelopeCorner.significant(ioutA) + " A";
         }
     }
 
@@ -46,7 +45,7 @@ public sealed interface LoadSetting {
 
         @Override
         public String describe() {
-            return String.format(Locale.ROOT, "%.4g×boundary", factor);
+            return EnvelopeCorner.significant(factor) + "×boundary";
         }
     }
 }

@@ -98,6 +98,11 @@ public final class ToleranceBox {
         return false;
     }
 
+    /** This box with quantity {@code j} alone (the others stay at nominal). */
+    ToleranceBox keepOnly(int j) {
+        return new ToleranceBox(List.of(parameters.get(j)), ctrTypical);
+    }
+
     /** The quantities, stage first. */
     public List<ToleranceParameter> parameters() {
         return parameters;

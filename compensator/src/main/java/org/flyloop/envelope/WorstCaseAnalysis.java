@@ -48,12 +48,17 @@ public final class WorstCaseAnalysis {
      * @param refine false to stop at the vertices (or the vertex search), for timing and comparison
      */
     public static WorstCase run(EnvelopeSetup setup, boolean refine) {
+        return run(setup, refine, MAX_ENUMERATED);
+    }
+
+    /** The worst case, enumerating vertices only up to {@code maxEnumerated} quantities. */
+    static WorstCase run(EnvelopeSetup setup, boolean refine, int maxEnumerated) {
         LoopEngine engine = new LoopEngine(setup);
         int k = setup.box().size();
         Tracker tracker = new Tracker(setup.corners().size());
         Set<String> infeasible = new LinkedHashSet<>();
         String method;
-        if (k <= MAX_ENUMERATED) {
+        if (k <= maxEnumerated) {
             enumerate(engine, tracker, infeasible);
             method = String.format(Locale.ROOT, "all %d vertices and the centre of the %d-quantity tolerance box "
                     + "at each of %d corners", 1 << k, k, setup.corners().size());
