@@ -1,6 +1,7 @@
 package org.flyloop.cli;
 
 import java.util.concurrent.Callable;
+import org.flyloop.cli.command.DesignCommand;
 import org.flyloop.cli.command.StageCommand;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -13,7 +14,7 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Design and verify the feedback loop of a flyback converter from a YAML spec.",
-        subcommands = {StageCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {DesignCommand.class, StageCommand.class, CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
             "0:ok",
@@ -44,6 +45,6 @@ public final class Main implements Callable<Integer> {
     /** Without a subcommand there is nothing to do: a usage error. */
     @Override
     public Integer call() {
-        throw new ParameterException(spec.commandLine(), "no command given (try flyloop stage SPEC.yaml)");
+        throw new ParameterException(spec.commandLine(), "no command given (try flyloop design SPEC.yaml)");
     }
 }
