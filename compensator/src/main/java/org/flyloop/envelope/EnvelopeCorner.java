@@ -15,13 +15,13 @@ import java.math.MathContext;
  */
 public record EnvelopeCorner(double vinV, LoadSetting load, double ctr, double nominalIoutA) {
 
-    /** "vin=36 V, iout=3 A", "vin=36 V, iout=1.02×boundary (2.31 A)", plus ", ctr=0.5" where one applies. */
+    /** "vin=36 V, iout=3 A", "vin=36 V, iout=1.02×boundary (2.31 A)", plus ", ctr=50 %" where one applies. */
     public String label() {
         String iout = load instanceof LoadSetting.Boundary
                 ? load.describe() + " (" + significant(nominalIoutA) + " A)"
                 : load.describe();
         String s = "vin=" + significant(vinV) + " V, iout=" + iout;
-        return Double.isNaN(ctr) ? s : s + ", ctr=" + significant(ctr);
+        return Double.isNaN(ctr) ? s : s + ", ctr=" + significant(100 * ctr) + " %";
     }
 
     /** Four significant digits without trailing zeros or exponent: 36, 0.5, 2.312. */

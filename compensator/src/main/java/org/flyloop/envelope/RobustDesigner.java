@@ -69,7 +69,12 @@ public final class RobustDesigner {
 
     /** The robust design for {@code request} under {@code tolerances}. */
     public static RobustDesign design(DesignRequest request, TolerancesSpec tolerances) {
-        DesignResult start = Designer.design(request);
+        return design(Designer.design(request), tolerances);
+    }
+
+    /** The robust design starting from the designer's {@code start} (its request, type and crossover). */
+    public static RobustDesign design(DesignResult start, TolerancesSpec tolerances) {
+        DesignRequest request = start.request();
         EnvelopeSetup setup = EnvelopeSetup.forWorstCase(request, start.rounded(), tolerances,
                 EnvelopeSetup.DEFAULT_POINTS);
         WorstCase startWorst = WorstCaseAnalysis.run(setup);

@@ -115,8 +115,8 @@ public final class WorstCaseAnalysis {
                 for (int c = 0; c < setup.corners().size(); c++) {
                     LoopFigures f = engine.figures(stages[a], network, c);
                     if (f == null) {
-                        infeasible.add(setup.corners().get(c).label() + " with " + setup.box().deviations(u) + ": "
-                                + stages[a].infeasible[c]);
+                        infeasible.add(setup.corners().get(c).label() + " with " + setup.box().deviations(u)
+                                + ": the stage cannot run: " + stages[a].infeasible[c]);
                     } else {
                         tracker.offerAll(c, u, f);
                     }
@@ -144,7 +144,7 @@ public final class WorstCaseAnalysis {
             Arrays.fill(centre, 0.5);
             LoopFigures atCentre = probe.evaluate(c, centre);
             if (atCentre == null) {
-                infeasible.add(setup.corners().get(c).label() + " with nominal parts");
+                infeasible.add(setup.corners().get(c).label() + " with nominal parts: the stage cannot run");
                 continue;
             }
             tracker.offerAll(c, centre, atCentre);

@@ -84,7 +84,7 @@ class EnvelopeCornersTest {
         List<EnvelopeCorner> corners = EnvelopeCorners.of(r.stage(), r.control(), r.feedback());
         assertEquals(8, corners.size());
         assertEquals(List.of(0.5, 1.6), corners.subList(0, 2).stream().map(EnvelopeCorner::ctr).toList());
-        assertTrue(corners.get(1).label().endsWith("ctr=1.6"), corners.get(1).label());
+        assertTrue(corners.get(1).label().endsWith("ctr=160 %"), corners.get(1).label());
         List<EnvelopeCorner> bare = EnvelopeCorners.withoutCtr(corners);
         assertEquals(4, bare.size());
         assertTrue(bare.stream().allMatch(c -> Double.isNaN(c.ctr())));
