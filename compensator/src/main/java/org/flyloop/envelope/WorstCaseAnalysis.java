@@ -2,9 +2,11 @@ package org.flyloop.envelope;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Set;
 
 /**
@@ -115,7 +117,7 @@ public final class WorstCaseAnalysis {
                 for (int c = 0; c < setup.corners().size(); c++) {
                     LoopFigures f = engine.figures(stages[a], network, c);
                     if (f == null) {
-                        infeasible.add(setup.corners().get(c).label() + " with " + setup.box().deviations(u)
+                        infeasible.add(setup.corners().get(c).label() + " with " + stageDeviations(setup, u)
                                 + ": the stage cannot run: " + stages[a].infeasible[c]);
                     } else {
                         tracker.offerAll(c, u, f);
@@ -123,6 +125,17 @@ public final class WorstCaseAnalysis {
                 }
             }
         }
+    }
+
+    /** The deviations of the stage quantities only (the stage side is what cannot run). */
+    private static Map<String, Double> stageDeviations(EnvelopeSetup setup, double[] u) {
+        Map<String, Double> all = new LinkedHashMap<>(setup.box().deviations(u));
+        for (ToleranceParameter p : setup.box().parameters()) {
+            if (!p.isStage()) {
+                all.remove(p.name());
+            }
+        }
+        return all;
     }
 
     /** Vertex {@code index} of a box of {@code dims} quantities; index == count gives the centre. */

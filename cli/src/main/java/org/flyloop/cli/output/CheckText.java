@@ -62,8 +62,7 @@ public final class CheckText {
             s.append('\n');
         }
         DesignResult shaped = after.asDesignResult();
-        s.append(DesignText.network(shaped).replace(", given placement", ", given parts (feedback.parts)"))
-                .append('\n');
+        s.append(network(shaped)).append('\n');
         s.append(before == null ? parts(after.network()) : parts(before.network(), after.network())).append('\n');
         TargetsSpec targets = after.request().targets();
         String heading = String.format(Locale.ROOT, "(targets: PM ≥ %s°, |GM| ≥ %s dB)",
@@ -99,6 +98,29 @@ public final class CheckText {
             s.append(SafetyNotice.ONE_LINE).append('\n');
         }
         return s.toString();
+    }
+
+    /** The network's kind and type, and the boost its zeros and poles give at the highest crossover. */
+    private static String network(DesignResult shaped) {
+        var p = shaped.placement();
+        StringBuilder s = new StringBuilder(String.format(Locale.ROOT, "Network: %s, type %d (%s), parts as given in "
+                        + "feedback.parts", shaped.request().feedback().amplifier().specName(), p.type(),
+                shaped.rounded().kind().specName()));
+        if (!Double.isNaN(p.crossoverHz()) && !(p.zerosHz().isEmpty() && p.polesHz().isEmpty())) {
+            s.append(String.format(Locale.ROOT, "; %.0f° of boost at the highest crossover, %s", p.boostDeg(),
+                    PartsNotation.engineering(p.crossoverHz(), "Hz", 3)));
+        }
+        s.append('\n');
+        if (!p.zerosHz().isEmpty() || !p.polesHz().isEmpty()) {
+            s.append("  zeros ").append(frequencies(p.zerosHz())).append("; poles ").append(frequencies(p.polesHz()))
+                    .append(" (besides the integrator)\n");
+        }
+        return s.toString();
+    }
+
+    private static String frequencies(List<Double> hz) {
+        return hz.isEmpty() ? "none" : String.join(", ", hz.stream().map(f -> PartsNotation.engineering(f, "Hz", 3))
+                .toList());
     }
 
     /** One line when every target is met, else every miss naming its corner. */
