@@ -80,6 +80,16 @@ public record LoopEvaluation(List<CornerResult> results) {
         return worst;
     }
 
+    /**
+     * The corner a load-step test is run at: among the corners at the largest load, the one with the
+     * smallest phase margin (a step up to full load at the line where the loop rings most).
+     */
+    public CornerResult loadStepCorner() {
+        double full = results.stream().mapToDouble(r -> r.corner().point().iout()).max().orElseThrow();
+        return new LoopEvaluation(results.stream().filter(r -> r.corner().point().iout() == full).toList())
+                .worstPhaseMargin();
+    }
+
     /** The corner whose gain margin has the smallest magnitude. */
     public CornerResult worstGainMargin() {
         CornerResult worst = null;

@@ -79,6 +79,13 @@ public final class NetworkSynthesizer {
                                        GainTarget gain, double ctrNominal) {
         FeedbackSpec fb = request.feedback();
         ShuntOptoBias bias = bias(request);
+        if (!(bias.ledResistorHeadroomV() > 0)) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "feedback.amplifier: shunt-opto needs the output above led_drop + shunt_min_voltage "
+                            + "(%.3g V + %.3g V), but vout is %.3g V; use a low-voltage shunt regulator "
+                            + "(set feedback.reference and shunt_min_voltage) or another amplifier",
+                    fb.ledDropV(), fb.shuntMinVoltageV(), request.stage().vout()));
+        }
         ESeries rSeries = ESeries.parse(request.series().resistors());
         double rBias = Double.isNaN(fb.parts().getOrDefault("r_bias", Double.NaN))
                 ? rSeries.atOrBelow(bias.maxBiasResistance()) : fb.parts().get("r_bias");

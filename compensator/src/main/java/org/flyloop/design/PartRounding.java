@@ -2,6 +2,7 @@ package org.flyloop.design;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.Set;
 import org.flyloop.eseries.ESeries;
 import org.flyloop.network.CompensatorNetwork;
 import org.flyloop.network.PartNames;
@@ -10,23 +11,37 @@ import org.flyloop.spec.SeriesSpec;
 
 /**
  * Rounds a network's resistors and capacitors to IEC 60063 series, nearest in the logarithmic
- * sense; devices (CTR, gm, GBW, the optocoupler's capacitance) are left alone. r_led rounds down,
- * never up, so that the bias constraint it was chosen under still holds.
+ * sense; devices (CTR, gm, GBW, the optocoupler's capacitance) and the parts the spec fixed are left
+ * alone. r_led rounds down, never up, so that the bias constraint it was chosen under still holds.
+ * A c_pullup below 1 % of the optocoupler's own capacitance changes the pole by less than 1 % and
+ * is left out rather than rounded to a capacitor nobody would fit.
  */
 public final class PartRounding {
+
+    static final double NEGLIGIBLE_PULLUP = 0.01;
 
     private PartRounding() {
     }
 
     /** The network with every resistor and capacitor on its series. */
     public static CompensatorNetwork round(CompensatorNetwork network, SeriesSpec series) {
+        return round(network, series, Set.of());
+    }
+
+    /** As {@link #round(CompensatorNetwork, SeriesSpec)}, keeping the named parts as they are. */
+    public static CompensatorNetwork round(CompensatorNetwork network, SeriesSpec series, Set<String> keep) {
         ESeries r = ESeries.parse(series.resistors());
         ESeries c = ESeries.parse(series.capacitors());
+        Map<String, Double> parts = network.parts();
         Map<String, Double> rounded = new LinkedHashMap<>();
-        for (Map.Entry<String, Double> e : network.parts().entrySet()) {
+        for (Map.Entry<String, Double> e : parts.entrySet()) {
             String name = e.getKey();
             double v = e.getValue();
-            if (name.equals(PartNames.C_OPTO)) {
+            if (name.equals(PartNames.C_OPTO) || keep.contains(name)) {
+                continue;
+            }
+            if (name.equals(PartNames.C_PULLUP) && v < NEGLIGIBLE_PULLUP * parts.getOrDefault(PartNames.C_OPTO, 0.0)) {
+                rounded.put(name, 0.0);
                 continue;
             }
             PartRole role = PartNames.role(name);

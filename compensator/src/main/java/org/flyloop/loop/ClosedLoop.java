@@ -36,8 +36,11 @@ public final class ClosedLoop {
 
     /**
      * Linear response of the output to a load step of {@code stepA} amperes: Δvo(s) =
-     * −Zcl(s)·ΔI/s, simulated from the closed-loop state-space model. The window covers the
-     * slowest closed-loop pole's decay (eight time constants, at least five crossover periods).
+     * −Zcl(s)·ΔI/s, from the closed-loop state-space model (exact step response through the matrix
+     * exponential, so any sample times may be used). The window covers eight time constants of the
+     * slowest closed-loop pole; the samples are spaced logarithmically from a thousandth of the
+     * fastest pole's time constant, so a fast pole that nearly cancels a zero (the optocoupler's,
+     * or the current loop's) and the slow tail are both resolved.
      */
     public static LoadStepResponse loadStep(TransferFunction openLoopZout, TransferFunction loop,
                                             double stepA, double voutV) {
@@ -48,27 +51,42 @@ public final class ClosedLoop {
             double sigma = Math.abs(p.re());
             if (sigma > 0) {
                 slowest = Math.min(slowest, sigma);
-                fastest = Math.max(fastest, p.omega0());
             }
+            fastest = Math.max(fastest, p.omega0());
         }
-        double window = Double.isInfinite(slowest) ? 1e-3 : 8 / slowest;
-        window = Math.min(window, 2000 / Math.max(fastest, 1e-12));
-        return loadStep(zcl, stepA, voutV, window);
+        if (Double.isInfinite(slowest) || fastest == 0) {
+            throw new IllegalArgumentException("the closed-loop output impedance has no decaying pole");
+        }
+        double window = 8 / slowest;
+        double first = 1e-3 / fastest;
+        double[] t = new double[SAMPLES + 1];
+        t[0] = 0;
+        double ratio = window / first;
+        for (int i = 1; i <= SAMPLES; i++) {
+            t[i] = first * Math.pow(ratio, (i - 1.0) / (SAMPLES - 1));
+        }
+        return loadStep(zcl, stepA, voutV, t);
     }
 
-    /** As {@link #loadStep(TransferFunction, TransferFunction, double, double)} over a given window. */
+    /** The step response of a closed-loop output impedance on a uniform grid over {@code windowS}. */
     public static LoadStepResponse loadStep(TransferFunction closedLoopZout, double stepA, double voutV,
                                             double windowS) {
-        StateSpace ss = StateSpace.fromTransferFunction(closedLoopZout);
         double[] t = new double[SAMPLES + 1];
         for (int i = 0; i <= SAMPLES; i++) {
             t[i] = windowS * i / SAMPLES;
         }
-        double[] unit = ss.stepResponse(t);
-        double[] dv = new double[t.length];
-        for (int i = 0; i < t.length; i++) {
+        return loadStep(closedLoopZout, stepA, voutV, t);
+    }
+
+    /** As {@link #loadStep(TransferFunction, TransferFunction, double, double)} at given sample times. */
+    public static LoadStepResponse loadStep(TransferFunction closedLoopZout, double stepA, double voutV,
+                                            double[] timesS) {
+        StateSpace ss = StateSpace.fromTransferFunction(closedLoopZout);
+        double[] unit = ss.stepResponse(timesS);
+        double[] dv = new double[timesS.length];
+        for (int i = 0; i < timesS.length; i++) {
             dv[i] = -stepA * unit[i];
         }
-        return LoadStepResponse.of(t, dv, stepA, SETTLING_BAND_FRACTION * voutV);
+        return LoadStepResponse.of(timesS, dv, stepA, SETTLING_BAND_FRACTION * voutV);
     }
 }

@@ -1,6 +1,7 @@
 package org.flyloop.network;
 
 import java.util.List;
+import org.flyloop.linear.Polynomial;
 import org.flyloop.linear.Root;
 import org.flyloop.linear.TransferFunction;
 
@@ -43,10 +44,11 @@ final class FiniteGainBandwidth {
         double wt = 2 * Math.PI * gbwHz;
         Polynomial niDf = ni.times(df).times(rLower);
         Polynomial den = niDf.times(wt)
-                .plus(niDf.plus(nf.times(ni.plus(di.times(rLower)))).timesS());
-        int integrators = den.rootsAtOrigin();
-        Polynomial rest = den.dividedByS(integrators);
-        double gain = wt * rLower * nf.coefficient(0) * di.coefficient(0) / rest.coefficient(0);
-        return TransferFunction.of(gain, integrators, idealZeros, rest.roots());
+                .plus(niDf.plus(nf.times(ni.plus(di.times(rLower)))).times(Polynomial.monomial(1)));
+        // The core's root finder (scaled companion matrix, Newton polishing) gives the poles.
+        TransferFunction poles = TransferFunction.fromPolynomials(Polynomial.constant(1), den);
+        int integrators = poles.integrators();
+        double gain = wt * rLower * nf.coefficient(0) * di.coefficient(0) / den.coefficient(integrators);
+        return TransferFunction.of(gain, integrators, idealZeros, poles.poles());
     }
 }

@@ -1,5 +1,7 @@
 package org.flyloop.network;
 
+import org.flyloop.linear.Polynomial;
+
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -81,7 +83,7 @@ public record OpAmpType1Network(double rUpper, double rLower, double cFb, double
         if (Double.isInfinite(gbwHz)) {
             return TransferFunction.integrators(1 / (rUpper * cFb), 1);
         }
-        return FiniteGainBandwidth.response(Polynomial.of(1), Polynomial.of(0, cFb),
-                Polynomial.of(rUpper), Polynomial.of(1), rLower, gbwHz, List.of());
+        return FiniteGainBandwidth.response(Polynomial.ofAscending(1), Polynomial.ofAscending(0, cFb),
+                Polynomial.ofAscending(rUpper), Polynomial.ofAscending(1), rLower, gbwHz, List.of());
     }
 }

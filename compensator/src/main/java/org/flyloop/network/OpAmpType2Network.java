@@ -4,6 +4,7 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.flyloop.linear.Polynomial;
 import org.flyloop.linear.Root;
 import org.flyloop.linear.TransferFunction;
 
@@ -101,7 +102,7 @@ public record OpAmpType2Network(double rUpper, double rLower, double rZero, doub
         if (Double.isInfinite(gbwHz)) {
             return TransferFunction.of(1 / (rUpper * b.totalCapacitance()), 1, zeros, List.of(b.pole()));
         }
-        return FiniteGainBandwidth.response(b.numerator(), b.denominator(), Polynomial.of(rUpper),
-                Polynomial.of(1), rLower, gbwHz, zeros);
+        return FiniteGainBandwidth.response(b.numerator(), b.denominator(), Polynomial.ofAscending(rUpper),
+                Polynomial.ofAscending(1), rLower, gbwHz, zeros);
     }
 }

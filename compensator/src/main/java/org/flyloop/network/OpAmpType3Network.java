@@ -4,6 +4,7 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.flyloop.linear.Polynomial;
 import org.flyloop.linear.Root;
 import org.flyloop.linear.TransferFunction;
 
@@ -127,7 +128,7 @@ public record OpAmpType3Network(double rUpper, double rLower, double rZero, doub
                     List.of(Root.real(-1 / (rFf * cFf)), b.pole()));
         }
         return FiniteGainBandwidth.response(b.numerator(), b.denominator(),
-                Polynomial.of(rUpper, rUpper * rFf * cFf), Polynomial.of(1, (rUpper + rFf) * cFf),
+                Polynomial.ofAscending(rUpper, rUpper * rFf * cFf), Polynomial.ofAscending(1, (rUpper + rFf) * cFf),
                 rLower, gbwHz, zeros);
     }
 }

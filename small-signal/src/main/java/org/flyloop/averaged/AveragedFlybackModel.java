@@ -27,11 +27,33 @@ public final class AveragedFlybackModel {
     private final AveragedSwitchNetwork network;
     private final double[] inputScales;
 
+    /**
+     * Relative compensation slope used when the spec gives none in peak current mode: the averaged
+     * relation of Erickson &amp; Maksimović (§12.3) has an unbounded duty gain at exactly zero slope
+     * (its duty equation touches zero instead of crossing it), so zero is taken as this fraction of
+     * the sensed on-slope at the highest input. It places the model's current-loop pole near
+     * (Sn + Sf)/(0.05·Sn·Ts), several times the switching frequency and far above the fsw/10 up
+     * to which an averaged model is read, while keeping the equations integrable with an explicit
+     * method; the DC gain then belongs to a controller with 5 % slope (mc = 1.05).
+     */
+    public static final double ZERO_SLOPE_FLOOR = 0.05;
+
     public AveragedFlybackModel(StageSpec stage, ControlSpec control) {
         this.stage = stage;
+        control = effectiveControl(stage, control);
         this.control = control;
         this.network = new AveragedSwitchNetwork(stage, control);
         this.inputScales = Jacobians.inputScales(0.1, stage.vin().typical(), stage.iout().max());
+    }
+
+    /** The control as the averaged model uses it: a zero slope in current mode becomes the floor. */
+    public static ControlSpec effectiveControl(StageSpec stage, ControlSpec control) {
+        if (control.scheme() != ControlScheme.CURRENT || control.slopeVPerS() > 0) {
+            return control;
+        }
+        double sensedOnSlope = control.senseVPerA() * stage.vin().max() / stage.lm();
+        return new ControlSpec(control.scheme(), control.rampV(), control.senseVPerA(),
+                ZERO_SLOPE_FLOOR * sensedOnSlope, control.dutyMax(), control.fbGain());
     }
 
     public StageSpec stage() {

@@ -34,7 +34,7 @@ public final class SpiceNetlistWriter {
 
     public SpiceNetlistWriter(StageSpec stage, ControlSpec control) {
         this.stage = stage;
-        this.control = control;
+        this.control = AveragedFlybackModel.effectiveControl(stage, control);
     }
 
     /** Netlist with the AC source on the control input. */

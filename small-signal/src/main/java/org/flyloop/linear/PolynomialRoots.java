@@ -2,10 +2,7 @@ package org.flyloop.linear;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.ejml.data.Complex_F64;
 import org.ejml.data.DMatrixRMaj;
-import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
-import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
 
 /**
  * Roots of real polynomials: eigenvalues of the balanced companion matrix (EJML), then
@@ -116,20 +113,9 @@ final class PolynomialRoots {
         eigenvalues(m, re, im);
     }
 
-    /** Eigenvalues of a real square matrix (balanced copy), into re/im. */
+    /** Eigenvalues of a real square matrix, into re/im; see {@link Eigenvalues}. */
     static void eigenvalues(DMatrixRMaj matrix, double[] re, double[] im) {
-        int n = matrix.numRows;
-        DMatrixRMaj m = matrix.copy();
-        MatrixBalancing.balanceInPlace(m);
-        EigenDecomposition_F64<DMatrixRMaj> eig = DecompositionFactory_DDRM.eig(n, false, false);
-        if (!eig.decompose(m)) {
-            throw new ArithmeticException("eigenvalue iteration did not converge");
-        }
-        for (int i = 0; i < n; i++) {
-            Complex_F64 v = eig.getEigenvalue(i);
-            re[i] = v.real;
-            im[i] = v.imaginary;
-        }
+        Eigenvalues.of(matrix, re, im);
     }
 
     /**

@@ -11,7 +11,7 @@ import org.ejml.dense.row.NormOps_DDRM;
  * Factored transfer function of a single-input single-output state-space model (A, b, c, d).
  *
  * <ul>
- *   <li>Poles: eigenvalues of A (balanced, EJML Hessenberg QR).</li>
+ *   <li>Poles: eigenvalues of A, block by block where A is reducible ({@link Eigenvalues}).</li>
  *   <li>Zeros: the invariant zeros, i.e. the λ where det [A − λI, b; c, d] = 0. While d = 0, an
  *       orthogonal (Householder) change of state coordinates makes c = [0 … 0 γ]; expanding the
  *       determinant along that row leaves the system matrix of a model with one state fewer
@@ -51,7 +51,7 @@ final class StateSpaceToTransferFunction {
         DMatrixRMaj c = siso.c();
         double[] re = new double[n];
         double[] im = new double[n];
-        PolynomialRoots.eigenvalues(a, re, im);
+        Eigenvalues.of(a, re, im);
         double omega = PolynomialRoots.powerOfTwoScale(geometricMeanModulus(re, im));
         CommonOps_DDRM.scale(1 / omega, a);
 
@@ -99,7 +99,7 @@ final class StateSpaceToTransferFunction {
         double[] re = new double[n];
         double[] im = new double[n];
         if (n > 0) {
-            PolynomialRoots.eigenvalues(m, re, im);
+            Eigenvalues.of(m, re, im);
         }
         List<double[]> out = new ArrayList<>();
         for (int i = 0; i < n; i++) {

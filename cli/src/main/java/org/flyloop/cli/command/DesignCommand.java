@@ -1,10 +1,13 @@
 package org.flyloop.cli.command;
 
+import java.io.IOException;
+import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.flyloop.cli.ExitCodes;
 import org.flyloop.cli.output.DesignJson;
 import org.flyloop.cli.output.DesignText;
 import org.flyloop.cli.output.PendingOutput;
+import org.flyloop.cli.report.DesignReport;
 import org.flyloop.cli.spec.InputException;
 import org.flyloop.cli.spec.Spec;
 import org.flyloop.design.DesignRequest;
@@ -35,6 +38,9 @@ public final class DesignCommand implements Callable<Integer> {
     @Mixin
     private SpecFileOptions specOptions;
 
+    @Mixin
+    private ReportOptions reportOptions;
+
     @picocli.CommandLine.Option(names = "--robust",
             description = "Move the zeros and poles to maximise the worst-case phase margin over the envelope "
                     + "(including the CCM/DCM boundary) and the spec's tolerances, at the same crossover (slower).")
@@ -56,6 +62,19 @@ public final class DesignCommand implements Callable<Integer> {
         } else {
             DesignText.print(output, result, new DesignText.Style(spec.displayTitle(), specOptions.quiet(),
                     colourWanted()));
+        }
+        if (reportOptions.wanted()) {
+            Path dir = reportOptions.directory(spec);
+            try {
+                Path html = DesignReport.write(result, ReportOptions.specName(spec), DesignJson.of(result), dir);
+                if (!specOptions.json()) {
+                    output.print("report: " + html.resolve("report.html") + " (with report.md, pictures and data/)"
+                            + System.lineSeparator());
+                }
+            } catch (IOException e) {
+                throw new InputException("--out " + dir, "cannot write the report: " + e.getMessage(),
+                        "give a writable directory");
+            }
         }
         output.commit(command.commandLine().getOut());
         return result.targetsMet() ? ExitCodes.OK : ExitCodes.TARGETS_NOT_MET;

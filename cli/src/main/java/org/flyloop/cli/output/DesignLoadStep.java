@@ -3,22 +3,15 @@ package org.flyloop.cli.output;
 import java.util.Optional;
 import org.flyloop.design.CornerResult;
 import org.flyloop.design.DesignResult;
-import org.flyloop.linear.Root;
 import org.flyloop.linear.TransferFunction;
 import org.flyloop.loop.ClosedLoop;
 import org.flyloop.loop.LoadStepResponse;
 
 /**
  * The load-step figure a design report shows: the linear closed-loop response of the output to a
- * load step of half the largest load current ({@link ClosedLoop#loadStep}), at the corner with
- * the smallest phase margin, where the response rings most. Half the full load is a middle value
+ * load step of half the largest load current up to full load ({@link ClosedLoop#loadStep}), at
+ * the full-load corner with the smallest phase margin, where the response rings most. Half the full load is a middle value
  * of the 25 % to 100 % steps in use (common practice, no source).
- *
- * <p>Two windows: {@link ClosedLoop}'s own, fine enough for the fastest closed-loop pole, gives
- * the peak; a second one of eight time constants of the slowest closed-loop pole gives the
- * settling time. One window cannot do both when a fast pole sits almost on a zero (the
- * optocoupler's pole, for example): resolving it would cut the window short of the slow tail, and
- * the "settling time" would then be measured against a value the output has not reached.
  *
  * @param corner         the corner the step is simulated at
  * @param stepA          the step, A (positive: more load)
@@ -33,8 +26,6 @@ public record DesignLoadStep(CornerResult corner, double stepA, double peakDevia
 
     /** The step as a fraction of the largest load current. */
     public static final double STEP_FRACTION_OF_MAX_LOAD = 0.5;
-    /** The settling window in time constants of the slowest closed-loop pole (e^-8 ≈ 0.03 %). */
-    static final double SETTLING_WINDOW_TIME_CONSTANTS = 8;
 
     /**
      * The step at the built network's worst-phase-margin corner; empty when that corner's closed
@@ -42,7 +33,7 @@ public record DesignLoadStep(CornerResult corner, double stepA, double peakDevia
      * grow).
      */
     public static Optional<DesignLoadStep> atWorstPhaseMargin(DesignResult result) {
-        CornerResult worst = result.roundedLoop().worstPhaseMargin();
+        CornerResult worst = result.roundedLoop().loadStepCorner();
         if (!worst.margins().isStable()) {
             return Optional.empty();
         }
@@ -54,26 +45,8 @@ public record DesignLoadStep(CornerResult corner, double stepA, double peakDevia
             // output impedance itself has a right-half-plane pole; a step through it only grows.
             return Optional.empty();
         }
-        LoadStepResponse fine = ClosedLoop.loadStep(zout, worst.loop(), step, vout);
-        TransferFunction zcl = ClosedLoop.outputImpedance(zout, worst.loop());
-        double fineWindow = fine.timesS()[fine.timesS().length - 1];
-        double slowWindow = SETTLING_WINDOW_TIME_CONSTANTS / slowestDecayPerSecond(zcl);
-        LoadStepResponse settling = slowWindow > fineWindow
-                ? ClosedLoop.loadStep(zcl, step, vout, slowWindow) : fine;
-        LoadStepResponse peak = Math.abs(settling.peakDeviationV()) > Math.abs(fine.peakDeviationV()) ? settling : fine;
-        return Optional.of(new DesignLoadStep(worst, step, peak.peakDeviationV(), peak.peakTimeS(),
-                settling.settlingBandV(), settling.settlingTimeS()));
-    }
-
-    /** The smallest |Re p| over the left-half-plane poles, 1/s (+∞ with none). */
-    private static double slowestDecayPerSecond(TransferFunction f) {
-        double slowest = Double.POSITIVE_INFINITY;
-        for (Root p : f.poles()) {
-            double sigma = Math.abs(p.re());
-            if (sigma > 0) {
-                slowest = Math.min(slowest, sigma);
-            }
-        }
-        return slowest;
+        LoadStepResponse r = ClosedLoop.loadStep(zout, worst.loop(), step, vout);
+        return Optional.of(new DesignLoadStep(worst, step, r.peakDeviationV(), r.peakTimeS(),
+                r.settlingBandV(), r.settlingTimeS()));
     }
 }

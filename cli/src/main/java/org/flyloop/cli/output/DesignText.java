@@ -157,7 +157,7 @@ public final class DesignText {
         } else {
             settle = "settles to " + band + " after " + PartsNotation.engineering(r.settlingTimeS(), "s", 3);
         }
-        return String.format(Locale.ROOT, "Load step, linear model: +%s (%s %% of %s) at %s, the worst-PM corner\n"
+        return String.format(Locale.ROOT, "Load step, linear model: +%s (%s %% of %s) up to %s (full load, worst PM there)\n"
                         + "  peak deviation %s at %s; %s\n",
                 PartsNotation.engineering(r.stepA(), "A", 3),
                 NumberText.significant(100 * DesignLoadStep.STEP_FRACTION_OF_MAX_LOAD, 2),

@@ -48,9 +48,15 @@ class StageCommandTest {
         Spec spec = SpecLoader.load(example);
         int corners = spec.stage().vin().corners().size() * spec.stage().iout().corners().size();
         String[] lines = run.out().split("\n");
-        assertEquals(corners + 3, lines.length, run.out());
+        // title, operating-point header and rows, a blank line, the small-signal caption, header and
+        // rows, one line per model warning, the caution
+        long warnings = Stream.of(lines).filter(l -> l.startsWith("warning: ")).count();
+        assertEquals(2 * corners + 6 + warnings, lines.length, run.out());
         assertEquals(spec.displayTitle(), lines[0]);
         assertTrue(lines[1].startsWith("vin[V]  iout[A]  mode"), lines[1]);
+        assertEquals("", lines[corners + 2]);
+        assertTrue(lines[corners + 3].startsWith("Control to output Gvc = vout/vc"), lines[corners + 3]);
+        assertTrue(lines[corners + 4].startsWith("vin[V]  iout[A]  mode  poles[Hz]"), lines[corners + 4]);
         assertEquals(SafetyNotice.ONE_LINE, lines[lines.length - 1]);
     }
 
@@ -121,6 +127,10 @@ class StageCommandTest {
         CliRun help = CliRun.of("stage", "--help");
         assertEquals(0, help.exitCode());
         assertTrue(help.out().contains("--vin") && help.out().contains("--json"), help.out());
+        for (String option : List.of("--bode", "--model", "--quantity", "--freq", "--transient", "--time", "--csv",
+                "--netlist")) {
+            assertTrue(help.out().contains(option), option + " in the help");
+        }
     }
 
     private static <T> List<T> iterable(java.util.Iterator<T> it) {

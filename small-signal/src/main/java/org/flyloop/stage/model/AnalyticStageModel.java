@@ -63,7 +63,7 @@ public final class AnalyticStageModel {
             // current loop); a vanishing ramp keeps the algebra finite and only moves that pole,
             // which Ridley's sampling pair replaces anyway.
             double snPrimary = control.senseVPerA() * point.vin() / stage.lm();
-            slope = Math.max(slope, 1e-9 * snPrimary);
+            slope = Math.max(slope, 1e-6 * snPrimary);
         }
         AveragedEquations eq = new AveragedEquations(stage, mode, r,
                 current ? control.senseVPerA() : 0, slope);
@@ -111,7 +111,11 @@ public final class AnalyticStageModel {
                 qp = 1 / (Math.PI * (mc * dPrime - 0.5));
                 double mcUnity = (0.5 + 1 / Math.PI) / dPrime;
                 slopeForUnityQp = Math.max(0, (mcUnity - 1) * sn);
+                // The sampled current loop shapes every response with the voltage loop open, not
+                // only the control-to-output one.
                 gvc = withSamplingPoles(gvc, stage.fswHz(), qp);
+                gvg = withSamplingPoles(gvg, stage.fswHz(), qp);
+                zout = withSamplingPoles(zout, stage.fswHz(), qp);
                 if (mc * dPrime <= 0.5) {
                     warnings.add(String.format(
                             "subharmonic oscillation: mc·D' = %.3f ≤ 0.5 at D = %.3f; add slope of at least %.4g V/s",
