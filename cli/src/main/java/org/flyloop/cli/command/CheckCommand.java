@@ -1,5 +1,6 @@
 package org.flyloop.cli.command;
 
+import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -9,6 +10,7 @@ import org.flyloop.cli.output.CheckText;
 import org.flyloop.cli.output.DesignText;
 import org.flyloop.cli.output.MonteCarloProgress;
 import org.flyloop.cli.output.PendingOutput;
+import org.flyloop.cli.report.CheckReport;
 import org.flyloop.cli.spec.InputException;
 import org.flyloop.cli.spec.Spec;
 import org.flyloop.cli.spec.SpecLoader;
@@ -47,6 +49,9 @@ public final class CheckCommand implements Callable<Integer> {
     @Mixin
     private SpecFileOptions specOptions;
 
+    @Mixin
+    private ReportOptions reportOptions;
+
     @Option(names = "--monte-carlo", paramLabel = "N",
             description = "Also draw N samples, each toleranced value uniform within its band, and report "
                     + "percentiles per corner (1 to " + MonteCarloAnalysis.MAX_SAMPLES + ").")
@@ -79,6 +84,19 @@ public final class CheckCommand implements Callable<Integer> {
         } else {
             output.print(CheckText.render(after, comparison,
                     new DesignText.Style(spec.displayTitle(), specOptions.quiet(), colourWanted())));
+        }
+        if (reportOptions.wanted()) {
+            Path dir = reportOptions.directory(spec);
+            try {
+                Path written = CheckReport.write(after, ReportOptions.specName(spec), CheckJson.of(after), dir);
+                if (!specOptions.json()) {
+                    output.print("report: " + written.resolve("report.html") + " (with report.md, pictures and data/)"
+                            + System.lineSeparator());
+                }
+            } catch (IOException e) {
+                throw new InputException("--out " + dir, "cannot write the report: " + e.getMessage(),
+                        "give a writable directory");
+            }
         }
         output.commit(command.commandLine().getOut());
         return after.meetsTargets() ? ExitCodes.OK : ExitCodes.TARGETS_NOT_MET;
