@@ -1,6 +1,7 @@
 package org.flyloop.cli;
 
 import java.util.concurrent.Callable;
+import org.flyloop.cli.command.CheckCommand;
 import org.flyloop.cli.command.DesignCommand;
 import org.flyloop.cli.command.StageCommand;
 import picocli.CommandLine;
@@ -14,7 +15,7 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Design and verify the feedback loop of a flyback converter from a YAML spec.",
-        subcommands = {DesignCommand.class, StageCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {DesignCommand.class, CheckCommand.class, StageCommand.class, CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
         exitCodeList = {
             "0:ok",

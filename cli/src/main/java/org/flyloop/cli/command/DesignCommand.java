@@ -13,6 +13,7 @@ import org.flyloop.cli.spec.Spec;
 import org.flyloop.design.DesignRequest;
 import org.flyloop.design.DesignResult;
 import org.flyloop.design.Designer;
+import org.flyloop.envelope.RobustDesigner;
 import org.flyloop.stage.InfeasibleOperatingPointException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -40,6 +41,11 @@ public final class DesignCommand implements Callable<Integer> {
     @Mixin
     private ReportOptions reportOptions;
 
+    @picocli.CommandLine.Option(names = "--robust",
+            description = "Move the zeros and poles to maximise the worst-case phase margin over the envelope "
+                    + "(including the CCM/DCM boundary) and the spec's tolerances, at the same crossover (slower).")
+    private boolean robust;
+
     @picocli.CommandLine.Spec
     private CommandSpec command;
 
@@ -47,6 +53,9 @@ public final class DesignCommand implements Callable<Integer> {
     public Integer call() {
         Spec spec = specOptions.loadSpec();
         DesignResult result = design(spec);
+        if (robust) {
+            result = robust(result, spec);
+        }
         PendingOutput output = new PendingOutput();
         if (specOptions.json()) {
             output.print(DesignJson.render(result));
@@ -93,6 +102,15 @@ public final class DesignCommand implements Callable<Integer> {
             // The designer's refusals (no realisable placement, a reference above the output) are
             // about the spec, not about flyloop.
             throw new InputException(spec.source(), e.getMessage(), "change the spec's targets or feedback choices");
+        }
+    }
+
+    /** The robust placement from the designer's result; see {@link RobustDesigner}. */
+    private static DesignResult robust(DesignResult start, Spec spec) {
+        try {
+            return RobustDesigner.design(start, spec.tolerances()).design();
+        } catch (InfeasibleOperatingPointException e) {
+            throw new InputException(spec.source(), e.getMessage(), null);
         }
     }
 
