@@ -185,6 +185,9 @@ final class PanelChart {
                 ys[i] = Double.NaN;
             }
         }
+        double[][] drawn = decimate(xs, ys, MAX_DRAWN_POINTS);
+        xs = drawn[0];
+        ys = drawn[1];
         XYSeries s = chart.addSeries(t.name(), xs, ys);
         drawnLines.add(new double[][] {xs, ys});
         s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Line);
@@ -194,6 +197,63 @@ final class PanelChart {
         if (look.glyph() != PlotTheme.Glyph.NONE) {
             addGlyphs(xs, ys, look, lookCount);
         }
+    }
+
+    /** Points drawn per trace at most; the CSV files keep every point. */
+    static final int MAX_DRAWN_POINTS = 900;
+
+    /**
+     * At most about {@code max} points of a trace for drawing: the samples are cut into buckets in
+     * index order and each bucket keeps its first point and its lowest and highest y, in order, so
+     * peaks and gaps (NaN) survive; a figure is a few hundred pixels wide, so nothing visible is lost
+     * while the SVG shrinks several-fold.
+     */
+    static double[][] decimate(double[] xs, double[] ys, int max) {
+        int n = xs.length;
+        if (n <= max) {
+            return new double[][] {xs, ys};
+        }
+        int buckets = max / 3;
+        java.util.List<Integer> keep = new java.util.ArrayList<>();
+        for (int b = 0; b < buckets; b++) {
+            int from = (int) ((long) b * n / buckets);
+            int to = (int) ((long) (b + 1) * n / buckets);
+            int lo = from;
+            int hi = from;
+            int gap = -1;
+            for (int i = from; i < to; i++) {
+                if (Double.isNaN(ys[i])) {
+                    gap = gap < 0 ? i : gap;
+                    continue;
+                }
+                if (Double.isNaN(ys[lo]) || ys[i] < ys[lo]) {
+                    lo = i;
+                }
+                if (Double.isNaN(ys[hi]) || ys[i] > ys[hi]) {
+                    hi = i;
+                }
+            }
+            java.util.TreeSet<Integer> chosen = new java.util.TreeSet<>(java.util.List.of(from, lo, hi));
+            if (gap >= 0) {
+                chosen.add(gap);
+            }
+            keep.addAll(chosen);
+        }
+        keep.add(n - 1);
+        double[] x = new double[keep.size()];
+        double[] y = new double[keep.size()];
+        int k = 0;
+        int last = -1;
+        for (int i : keep) {
+            if (i == last) {
+                continue;
+            }
+            x[k] = xs[i];
+            y[k] = ys[i];
+            k++;
+            last = i;
+        }
+        return new double[][] {java.util.Arrays.copyOf(x, k), java.util.Arrays.copyOf(y, k)};
     }
 
     /** Sparse glyphs along an ordinary trace, so it can be told apart in greyscale. */
