@@ -6,7 +6,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import org.flyloop.network.CompensatorNetwork;
-import org.flyloop.network.PartNames;
 import org.flyloop.network.ShuntOptoNetwork;
 import org.flyloop.network.UnrealisablePlacementException;
 import org.flyloop.spec.AmplifierKind;
@@ -116,7 +115,7 @@ public final class Designer {
         CompensatorNetwork rounded;
         try {
             s = NetworkSynthesizer.synthesize(request, p, 1 / stageGain, ctrNominal);
-            rounded = PartRounding.round(s.network(), request.series(), specFixedParts(request.feedback()));
+            rounded = PartRounding.round(s.network(), request.series(), request.feedback());
         } catch (UnrealisablePlacementException e) {
             return null;
         }
@@ -124,25 +123,6 @@ public final class Designer {
         LoopEvaluation ideal = LoopEvaluation.of(s.network(), corners, fbGain, fsw, request.targets());
         LoopEvaluation round = LoopEvaluation.of(rounded, corners, fbGain, fsw, request.targets());
         return new Attempt(p, s.network(), rounded, ideal, round, s.note());
-    }
-
-    /** Parts whose values the spec fixes: they are used as given, never rounded. */
-    static Set<String> specFixedParts(FeedbackSpec fb) {
-        Set<String> keep = new java.util.HashSet<>();
-        keep.add(PartNames.R_PULLUP);
-        if (!Double.isNaN(fb.rUpper())) {
-            keep.add(PartNames.R_UPPER);
-        }
-        if (!Double.isNaN(fb.rLower())) {
-            keep.add(PartNames.R_LOWER);
-        }
-        if (!Double.isNaN(fb.rLed())) {
-            keep.add(PartNames.R_LED);
-        }
-        if (fb.parts().containsKey(PartNames.R_BIAS)) {
-            keep.add(PartNames.R_BIAS);
-        }
-        return keep;
     }
 
     /** The CTR the network is designed at: the nominal if given, else the geometric mean of the range. */

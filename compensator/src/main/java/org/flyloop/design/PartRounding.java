@@ -1,5 +1,6 @@
 package org.flyloop.design;
 
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Set;
@@ -7,6 +8,7 @@ import org.flyloop.eseries.ESeries;
 import org.flyloop.network.CompensatorNetwork;
 import org.flyloop.network.PartNames;
 import org.flyloop.network.PartRole;
+import org.flyloop.spec.FeedbackSpec;
 import org.flyloop.spec.SeriesSpec;
 
 /**
@@ -23,12 +25,37 @@ public final class PartRounding {
     private PartRounding() {
     }
 
-    /** The network with every resistor and capacitor on its series. */
-    public static CompensatorNetwork round(CompensatorNetwork network, SeriesSpec series) {
-        return round(network, series, Set.of());
+    /**
+     * The network with every resistor and capacitor on its series, except the parts the spec's
+     * feedback section fixes ({@link #specFixedParts}).
+     */
+    public static CompensatorNetwork round(CompensatorNetwork network, SeriesSpec series, FeedbackSpec feedback) {
+        return round(network, series, specFixedParts(feedback));
     }
 
-    /** As {@link #round(CompensatorNetwork, SeriesSpec)}, keeping the named parts as they are. */
+    /**
+     * Parts whose values the spec fixes, used as given and never rounded: r_pullup always, and
+     * r_upper, r_lower, r_led and r_bias when the spec gives them.
+     */
+    public static Set<String> specFixedParts(FeedbackSpec fb) {
+        Set<String> keep = new HashSet<>();
+        keep.add(PartNames.R_PULLUP);
+        if (!Double.isNaN(fb.rUpper())) {
+            keep.add(PartNames.R_UPPER);
+        }
+        if (!Double.isNaN(fb.rLower())) {
+            keep.add(PartNames.R_LOWER);
+        }
+        if (!Double.isNaN(fb.rLed())) {
+            keep.add(PartNames.R_LED);
+        }
+        if (fb.parts().containsKey(PartNames.R_BIAS)) {
+            keep.add(PartNames.R_BIAS);
+        }
+        return keep;
+    }
+
+    /** The network with every resistor and capacitor on its series, keeping the named parts as they are. */
     public static CompensatorNetwork round(CompensatorNetwork network, SeriesSpec series, Set<String> keep) {
         ESeries r = ESeries.parse(series.resistors());
         ESeries c = ESeries.parse(series.capacitors());

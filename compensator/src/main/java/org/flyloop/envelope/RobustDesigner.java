@@ -106,7 +106,7 @@ public final class RobustDesigner {
         if (ideal == null) {
             return new RobustDesign(start, start, startWorst, startWorst, problem.evaluations, false);
         }
-        CompensatorNetwork rounded = PartRounding.round(ideal, request.series());
+        CompensatorNetwork rounded = PartRounding.round(ideal, request.series(), request.feedback());
         WorstCase worst = WorstCaseAnalysis.run(setup.withNetwork(rounded));
         if (!(rankedPm(worst) > rankedPm(startWorst))) {
             return new RobustDesign(start, start, startWorst, startWorst, problem.evaluations, false);

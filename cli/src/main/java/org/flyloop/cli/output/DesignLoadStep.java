@@ -10,8 +10,8 @@ import org.flyloop.loop.LoadStepResponse;
 /**
  * The load-step figure a design report shows: the linear closed-loop response of the output to a
  * load step of half the largest load current up to full load ({@link ClosedLoop#loadStep}), at
- * the full-load corner with the smallest phase margin, where the response rings most. Half the full load is a middle value
- * of the 25 % to 100 % steps in use (common practice, no source).
+ * the full-load corner with the smallest phase margin, where the response rings most. Half the
+ * full load is a middle value of the 25 % to 100 % steps in use (common practice, no source).
  *
  * @param corner         the corner the step is simulated at
  * @param stepA          the step, A (positive: more load)
@@ -28,11 +28,12 @@ public record DesignLoadStep(CornerResult corner, double stepA, double peakDevia
     public static final double STEP_FRACTION_OF_MAX_LOAD = 0.5;
 
     /**
-     * The step at the built network's worst-phase-margin corner; empty when that corner's closed
+     * The step at the built network's load-step corner (full load, smallest phase margin there;
+     * {@link org.flyloop.design.LoopEvaluation#loadStepCorner}); empty when that corner's closed
      * loop, or its closed-loop output impedance, is not stable (a linear step response would only
      * grow).
      */
-    public static Optional<DesignLoadStep> atWorstPhaseMargin(DesignResult result) {
+    public static Optional<DesignLoadStep> atLoadStepCorner(DesignResult result) {
         CornerResult worst = result.roundedLoop().loadStepCorner();
         if (!worst.margins().isStable()) {
             return Optional.empty();

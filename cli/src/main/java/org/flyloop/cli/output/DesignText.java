@@ -51,7 +51,7 @@ public final class DesignText {
         s.append(parts(result)).append('\n');
         s.append(corners(result.roundedLoop(), result.request().targets(), style.colour())).append('\n');
         s.append(worst(result.roundedLoop(), result.request().targets()));
-        s.append(loadStep(DesignLoadStep.atWorstPhaseMargin(result), result.request().stage().vout())).append('\n');
+        s.append(loadStep(DesignLoadStep.atLoadStepCorner(result), result.request().stage().vout())).append('\n');
         List<String> warnings = DesignWarnings.of(result);
         if (!warnings.isEmpty()) {
             s.append(bullets("Warnings:", warnings)).append('\n');
